@@ -1,0 +1,38 @@
+import type { Unit } from 'mathjs';
+import { normalizeUnitText } from './normalize-unit-text';
+import { quantityKinds, type QuantityKind } from './quantity-kinds';
+import { UnitError } from './unit-error';
+import { unitMath } from './unit-math';
+
+/**
+ * Read a unit as typed and check that it measures the given kind of quantity.
+ *
+ * ## Method
+ * The text is normalised ({@link normalizeUnitText}), parsed by the units library as one unit of
+ * that unit, and its dimension compared with the kind's SI unit (`equalBase`), so that "mm" is refused
+ * for a viscosity and "1/K" is accepted for an expansion coefficient.
+ *
+ * ## References
+ * - BIPM (2019) "The International System of Units (SI)", 9th ed., §2.3 (base and derived units).
+ *
+ * @param unitText - the unit as typed, e.g. `"mN/m"`
+ * @param kind - the quantity it must measure
+ * @returns the library unit (value 1) and its normalised text
+ * @throws UnitError when the unit is unknown or measures something else
+ * @example resolveUnit('cP', 'dynamicViscosity').unit.toNumber('Pa s') // 0.001
+ */
+export function resolveUnit(unitText: string, kind: QuantityKind): { unit: Unit; normalized: string } {
+  const info = quantityKinds[kind];
+  const normalized = normalizeUnitText(unitText, kind);
+  if (normalized === '') throw new UnitError(info.label, unitText, info.units, 'no unit given');
+  let unit: Unit;
+  try {
+    unit = unitMath.unit(1, normalized);
+  } catch {
+    throw new UnitError(info.label, unitText, info.units, `unknown unit "${unitText}"`);
+  }
+  if (!unit.equalBase(unitMath.unit(1, info.siUnit))) {
+    throw new UnitError(info.label, unitText, info.units, `unit "${unitText}" is not a unit of ${info.label}`);
+  }
+  return { unit, normalized };
+}
