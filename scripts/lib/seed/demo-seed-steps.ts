@@ -1,0 +1,8 @@
+import { seedDemoUsers } from './demo-users';
+import type { SeedStep } from './seed-step';
+
+/**
+ * The demo scenario, in dependency order. A feature that brings demo data adds its own
+ * file next to this one (e.g. demo-fluids.ts exporting seedDemoFluids) and one line here.
+ */
+export const demoSeedSteps: SeedStep[] = [seedDemoUsers];
