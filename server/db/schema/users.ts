@@ -16,6 +16,8 @@ export const users = pgTable(
     /** Consecutive failed sign-ins; reset on success. Drives the per-account back-off. */
     failedSignIns: integer('failed_sign_ins').notNull().default(0),
     lockedUntil: timestamp('locked_until', { withTimezone: true }),
+    /** Sessions issued before this moment are refused (set when the password is reset). */
+    sessionsValidAfter: timestamp('sessions_valid_after', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -1,0 +1,96 @@
+import { randomUUID } from 'node:crypto';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Database } from './db/client';
+import type { Env } from './env';
+import { createLogger, type Logger } from './logger';
+import type { AppDeps, RateLimitSettings } from './http/app-deps';
+import { assertEveryApiRouteIsDefined, createApiRouter } from './http/define-route';
+import { createErrorHandler } from './middleware/error-handler';
+import { apiNotFound } from './middleware/not-found';
+import { registerAuditRoutes } from './features/audit/audit.routes';
+import { registerAuthRoutes } from './features/auth/auth.routes';
+import { registerConfigRoutes } from './features/config/config.routes';
+import { registerHealthRoutes } from './features/health/health.routes';
+import { registerInvitationsRoutes } from './features/invitations/invitations.routes';
+import { registerOutboxRoutes } from './features/outbox/outbox.routes';
+import { registerUsersRoutes } from './features/users/users.routes';
+
+/** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
+export const JSON_BODY_LIMIT = '1mb';
+
+/** Defaults: 20 sign-in attempts and 30 token uses per client address per 15 minutes. */
+export const DEFAULT_RATE_LIMITS: AppDeps['rateLimits'] = {
+  signIn: { windowMs: 15 * 60 * 1000, limit: 20 },
+  tokenUse: { windowMs: 15 * 60 * 1000, limit: 30 },
+};
+
+export interface CreateAppDeps {
+  db: Database;
+  env: Env;
+  logger?: Logger;
+  rateLimits?: Partial<{ signIn: RateLimitSettings; tokenUse: RateLimitSettings }>;
+  /** Folder with the built client (index.html); defaults to <project>/dist/client. Served only if it exists. */
+  clientDir?: string;
+}
+
+const REQUEST_ID = /^[\w.:-]{1,100}$/;
+const defaultClientDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist', 'client');
+
+/** Builds the Express app (middleware, every route, error handler). Never listens. */
+export function createApp(input: CreateAppDeps): Express {
+  const logger = input.logger ?? createLogger(input.env.LOG_LEVEL);
+  const deps: AppDeps = {
+    db: input.db,
+    env: input.env,
+    logger,
+    rateLimits: { ...DEFAULT_RATE_LIMITS, ...input.rateLimits },
+  };
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(helmet());
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const incoming = req.headers['x-request-id'];
+        const id = typeof incoming === 'string' && REQUEST_ID.test(incoming) ? incoming : randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+    }),
+  );
+  app.use(express.json({ limit: JSON_BODY_LIMIT }));
+
+  const api = createApiRouter(deps);
+  registerHealthRoutes(api);
+  registerConfigRoutes(api);
+  registerAuthRoutes(api);
+  registerInvitationsRoutes(api);
+  registerUsersRoutes(api);
+  registerAuditRoutes(api);
+  registerOutboxRoutes(api);
+  app.use(api.router);
+  app.use('/api', apiNotFound);
+
+  const clientDir = input.clientDir ?? defaultClientDir;
+  const indexHtml = path.join(clientDir, 'index.html');
+  if (existsSync(indexHtml)) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Client-side routes (/admin/users, /accept-invitation, …) all load the single page.
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
+
+  app.use(createErrorHandler(logger));
+  assertEveryApiRouteIsDefined(app);
+  return app;
+}

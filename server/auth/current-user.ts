@@ -1,0 +1,33 @@
+import { eq } from 'drizzle-orm';
+import type { DbOrTx } from '../db/client';
+import { users } from '../db/schema';
+import type { Me } from '../../shared/schemas/auth';
+
+/** The signed-in person for this request, reloaded from the database every time. */
+export type CurrentUser = Me;
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Loads the user a session belongs to. Null (which ends the session) when the user is
+ * missing or inactive, or when the session was issued before their sessions were revoked
+ * (a password reset revokes every earlier session).
+ */
+export async function loadSessionUser(db: DbOrTx, userId: string, issuedAt: number): Promise<CurrentUser | null> {
+  if (!UUID.test(userId)) return null;
+  const [row] = await db
+    .select({
+      id: users.id,
+      email: users.email,
+      displayName: users.displayName,
+      role: users.role,
+      active: users.active,
+      sessionsValidAfter: users.sessionsValidAfter,
+    })
+    .from(users)
+    .where(eq(users.id, userId))
+    .limit(1);
+  if (!row || !row.active) return null;
+  if (row.sessionsValidAfter && issuedAt < row.sessionsValidAfter.getTime()) return null;
+  return { id: row.id, email: row.email, displayName: row.displayName, role: row.role };
+}
