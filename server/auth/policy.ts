@@ -35,6 +35,14 @@ export const policy = {
   'users.update': ['administrator'],
   'audit.list': ['administrator'],
   'outbox.list': ['administrator'],
+  // Fluid library and layer checks (issue 4). Process engineers own the process data; administrators
+  // run the site and technicians/reviewers read, so only engineers write fluids and checks.
+  'fluids.read': SIGNED_IN,
+  'fluids.write': ['engineer'],
+  'layerChecks.read': SIGNED_IN,
+  'layerChecks.write': ['engineer'],
+  'layerChecks.evaluate': SIGNED_IN,
+  'batch.evaluate': ['engineer'],
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policy;
