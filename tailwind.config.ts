@@ -14,7 +14,8 @@ export default {
         sans: ['"Noto Sans"', 'system-ui', 'sans-serif'],
       },
       colors: {
-        ink: { DEFAULT: '#1d2733', soft: '#4a5868', faint: '#7c8a99' },
+        // faint is darkened from a lighter grey so small text still passes WCAG AA (≥ 4.5:1) on paper.
+        ink: { DEFAULT: '#1d2733', soft: '#4a5868', faint: '#5f6d7c' },
         paper: { DEFAULT: '#f7f8f6', raised: '#ffffff', sunk: '#eceeea' },
         slate: { line: '#d3d8dc' },
         brand: { DEFAULT: '#2d4f6c', dark: '#1f3a52', light: '#dbe6ef' },

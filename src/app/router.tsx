@@ -1,0 +1,39 @@
+import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { paths } from '../config/paths';
+import { AcceptInvitationRoute } from './routes/accept-invitation';
+import { AppRoot, appRootLoader } from './routes/app-root';
+import { ForgotPasswordRoute } from './routes/forgot-password';
+import { HomeRoute } from './routes/home';
+import { NotFoundRoute } from './routes/not-found';
+import { ResetPasswordRoute } from './routes/reset-password';
+import { RouteError } from './routes/route-error';
+import { SignInRoute } from './routes/sign-in';
+
+/**
+ * Pages used before sign-in, then the signed-in frame. Administrator pages load on demand
+ * (route `lazy`), so other roles never download them.
+ */
+export const router = createBrowserRouter([
+  { path: paths.signIn, element: <SignInRoute />, errorElement: <RouteError /> },
+  { path: paths.forgotPassword, element: <ForgotPasswordRoute />, errorElement: <RouteError /> },
+  { path: paths.resetPassword, element: <ResetPasswordRoute />, errorElement: <RouteError /> },
+  { path: paths.acceptInvitation, element: <AcceptInvitationRoute />, errorElement: <RouteError /> },
+  {
+    id: 'app',
+    element: <AppRoot />,
+    loader: appRootLoader,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <></>,
+    children: [
+      { index: true, element: <HomeRoute />, errorElement: <RouteError /> },
+      { path: paths.adminUsers, lazy: () => import('./routes/admin/users') },
+      { path: paths.adminOutbox, lazy: () => import('./routes/admin/outbox') },
+      { path: paths.adminAudit, lazy: () => import('./routes/admin/audit') },
+    ],
+  },
+  { path: '*', element: <NotFoundRoute /> },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,7 @@
+import { useEffect } from 'react';
+
+export function useDocumentTitle(title: string) {
+  useEffect(() => {
+    document.title = title ? `${title} · QuietLayer` : 'QuietLayer';
+  }, [title]);
+}
