@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { integrateAdaptive } from './integrate-adaptive';
+import { denseOutputAt } from './dense-output-at';
 
 // Exact solutions used below are textbook closed forms (no code under test involved):
 // y' = −λy → y = y0·e^(−λt); x'' = −ω²x → x = cos ωt, energy E = (v² + ω²x²)/2 constant.
@@ -98,5 +99,15 @@ describe('integrateAdaptive (Dormand–Prince 5(4))', () => {
     expect(() => integrateAdaptive((_t, y) => [-y[0]], 0, [1], 1, { atol: [1, 2] })).toThrow(/atol/);
     expect(() => integrateAdaptive(() => [Number.NaN], 0, [1], 1)).toThrow(/not finite/);
     expect(() => integrateAdaptive((_t, y) => [-y[0]], 0, [1], 1, { outputTimes: [2] })).toThrow(/outputTimes/);
+  });
+});
+
+describe('denseOutputAt', () => {
+  it('reads the dense output anywhere in the span (exact: e^−t)', () => {
+    const sol = integrateAdaptive((_t, y) => [-y[0]], 0, [1], 3, { rtol: 1e-9, atol: 1e-12, dense: true });
+    for (const t of [0, 0.123, 1, 1.7, 2.999, 3]) {
+      expect(Math.abs(denseOutputAt(sol.dense, t)[0] - Math.exp(-t))).toBeLessThan(1e-8);
+    }
+    expect(() => denseOutputAt(sol.dense, 3.5)).toThrow(/t must lie/);
   });
 });

@@ -1,4 +1,4 @@
-import type { AdaptiveOptions, OdeEvent, OdeEventHit, OdeRightHandSide, OdeSolution } from './types';
+import type { AdaptiveOptions, DenseSegment, OdeEvent, OdeEventHit, OdeRightHandSide, OdeSolution } from './types';
 
 // Dormand–Prince 5(4) tableau (Dormand & Prince 1980, Table 2; Hairer, Nørsett & Wanner 1993, Table II.5.2).
 const C2 = 1 / 5, C3 = 3 / 10, C4 = 4 / 5, C5 = 8 / 9;
@@ -19,15 +19,7 @@ const FAC_MIN = 0.2;
 const FAC_MAX = 10;
 const EVENT_ITERATIONS = 100;
 
-interface DenseStep {
-  t0: number;
-  h: number;
-  r1: number[];
-  r2: number[];
-  r3: number[];
-  r4: number[];
-  r5: number[];
-}
+type DenseStep = DenseSegment;
 
 function denseValue(step: DenseStep, t: number): number[] {
   const s = (t - step.t0) / step.h;
@@ -149,6 +141,8 @@ export function integrateAdaptive(
   const maxSteps = options.maxSteps ?? 100_000;
   if (!(maxSteps >= 1)) throw new RangeError(`maxSteps must be ≥ 1, got ${maxSteps}`);
   const keepSteps = options.keepSteps ?? true;
+  const keepDense = options.dense ?? false;
+  const segments: DenseSegment[] = [];
   const events = options.events ?? [];
   const outputTimes = [...(options.outputTimes ?? [])].sort((a, b) => a - b);
   for (const t of outputTimes) {
@@ -270,6 +264,8 @@ export function integrateAdaptive(
       dense.r5[i] = h * (D1 * k1[i] + D3 * k3[i] + D4 * k4[i] + D5 * k5[i] + D6 * k6[i] + D7 * k7[i]);
     }
 
+    if (keepDense) segments.push(dense);
+
     // Events on this step: the earliest terminal crossing ends the integration there.
     let stopAt = Number.POSITIVE_INFINITY;
     const stepHits: OdeEventHit[] = [];
@@ -325,6 +321,7 @@ export function integrateAdaptive(
     outputTimes: outT,
     outputStates: outY,
     events: hits,
+    dense: segments,
     stats,
   };
 }

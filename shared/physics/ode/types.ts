@@ -42,6 +42,22 @@ export interface AdaptiveOptions {
   events?: readonly OdeEvent[];
   /** Keep every accepted step in the result (default true). */
   keepSteps?: boolean;
+  /** Return the dense-output coefficients of every accepted step (default false); read them with denseOutputAt. */
+  dense?: boolean;
+}
+
+/**
+ * Dense-output coefficients of one accepted step on [t0, t0 + h]: with s = (t − t0)/h,
+ * y(t) = r1 + s·(r2 + (1 − s)·(r3 + s·(r4 + (1 − s)·r5))) (Hairer, Nørsett & Wanner 1993, §II.6).
+ */
+export interface DenseSegment {
+  t0: number;
+  h: number;
+  r1: number[];
+  r2: number[];
+  r3: number[];
+  r4: number[];
+  r5: number[];
 }
 
 /** One located event crossing. */
@@ -76,6 +92,8 @@ export interface OdeSolution {
   outputStates: number[][];
   /** Event crossings in time order. */
   events: OdeEventHit[];
+  /** Dense-output segments in time order (empty unless options.dense). */
+  dense: DenseSegment[];
   /** Counters: accepted and rejected steps, right-hand-side evaluations. */
   stats: { accepted: number; rejected: number; evaluations: number };
 }
