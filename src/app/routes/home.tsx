@@ -24,10 +24,10 @@ export function HomeRoute() {
           </>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className={places.length > 0 ? 'grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]' : 'max-w-3xl'}>
         <section aria-labelledby="role-title" className="rounded-md border border-slate-line bg-paper-raised p-5">
           <h2 id="role-title" className="text-lg font-semibold">
-            What a {roleLabels[me.role]} does here
+            Your part as {roleLabels[me.role]}
           </h2>
           <p className="mt-1 text-ink-soft">{guide.summary}</p>
           <ul className="mt-4 flex flex-col gap-2">

@@ -42,6 +42,7 @@ export function UserMenu({ displayName, email, roleLabel, onSignOut, signingOut 
         type="button"
         aria-expanded={open}
         aria-controls={menuId}
+        data-testid="user-menu-toggle"
         onClick={() => setOpen((value) => !value)}
         className="flex min-h-11 items-center gap-3 rounded-md border border-slate-line bg-paper-raised px-3 py-1 text-left hover:border-brand"
       >
