@@ -1,11 +1,10 @@
 /**
  * Linear stability solver of QuietLayer: stationary onset of buoyancy and thermocapillary
- * convection in a horizontal liquid layer, flat or deformable surface.
+ * convection in a horizontal liquid layer, flat or deformable surface. Pure functions, no state.
  *
- * Public API (signatures are stable):
  * - marginalFactor(problem, wavenumber): λ(k)
  * - neutralCurve(problem, options)
- * - onsetMargin(problem): OnsetResult
+ * - onsetMargin(problem): OnsetResult (the Onset margin and its regime)
  * - criticalRayleigh(boundaries), criticalMarangoni(boundaries)
  * - classifyRegime({ margin, buoyancyShare, longWave })
  * - regimeLabels
@@ -22,4 +21,11 @@ export type {
   NeutralCurve,
   CriticalValue,
 } from './types';
+export type { RegimeInputs } from './classify-regime';
 export { regimeLabels } from './regime-labels';
+export { marginalFactor } from './marginal-factor';
+export { neutralCurve } from './neutral-curve';
+export { onsetMargin } from './onset-margin';
+export { criticalRayleigh } from './critical-rayleigh';
+export { criticalMarangoni } from './critical-marangoni';
+export { classifyRegime, BUOYANCY_DOMINANT_SHARE, SURFACE_TENSION_DOMINANT_SHARE } from './classify-regime';

@@ -1,0 +1,155 @@
+import type { ChebyshevCollocation } from './chebyshev-collocation';
+import { matrixEigenvalues } from './matrix-eigenvalues';
+import { solveLinearSystems } from './solve-linear-systems';
+import type { CheckedProblem } from './validate-problem';
+
+/** Relative size of an imaginary part below which an eigenvalue counts as real (round-off splits double roots). */
+const REAL_TOLERANCE = 1e-6;
+
+/**
+ * Marginal factor λ(k) of a checked problem on a given collocation grid (the solver's kernel).
+ *
+ * ## Method
+ * Scales: length d, velocity κ/d, pressure μκ/d², temperature ΔT. Conduction state T̄ = −z
+ * (relative to the bottom), surface at z = 1. Normal modes w = W(z)e^{ikx}, θ = Θ(z)e^{ikx},
+ * surface deflection ζ = H e^{ikx}. Boussinesq, steady (growth rate 0, so the Prandtl number
+ * drops out), after eliminating pressure and horizontal velocity:
+ *
+ *     (D² − k²)² W = λRa k² Θ,        (D² − k²) Θ = −W,        0 < z < 1.
+ *
+ * Bottom (z = 0): W = 0 and DW = 0 (rigid) or D²W = 0 (free); Θ = 0 (conducting) or DΘ = 0
+ * (insulating). Top 'rigid': W = DW = 0; top 'free': W = D²W = 0; both with DΘ + Bi Θ = 0
+ * (Θ = 0 when Bi = ∞).
+ *
+ * Top 'surface' at z = 1 + ζ, derived from the linearised stress and heat balances:
+ * - kinematic ∂ζ/∂t = w ⇒ W(1) = 0 for a stationary mode;
+ * - heat: surface temperature perturbation is Θ(1) + (dT̄/dz)H = Θ(1) − H, so the Newton
+ *   cooling condition becomes DΘ + Bi(Θ − H) = 0 (Θ = H when Bi = ∞);
+ * - tangential stress μ(∂u/∂z + ∂w/∂x) = ∂σ/∂x = −σ_T ∂T_s/∂x, with U = iDW/k from
+ *   continuity and W(1) = 0: D²W = −λMa k²(Θ − H);
+ * - normal stress −p + 2μ ∂w/∂z − (hydrostatic −ρgζ) = σ ∂²ζ/∂x², with the pressure from the
+ *   horizontal momentum balance P = (D² − k²)DW/k²: D³W − 3k²DW = k²(Ga + k²/Cr)H, i.e.
+ *   H = Cr (D³W − 3k²DW)(1) / (k²(Bo + k²)), Ga = Bo/Cr. Cr → 0 gives H → 0: Pearson's flat
+ *   surface. For k → 0 with a rigid conducting bottom this yields (derived here by a regular
+ *   expansion W = k²w, Θ = Bi z/(1+Bi) H + O(k²)) the long-wave threshold
+ *   λ_LW = (2/3)Ga(1 + Bi) / (Ma + (11/60)·Bi·Ra), which for Ra = 0 is VanHook et al.'s
+ *   Ma_LW = (2/3)Ga(1 + Bi); for a free (slip) bottom λ_LW = Ga(1 + Bi)/(Ma + Bi·Ra/3).
+ *
+ * Discretisation: Chebyshev collocation for W and Θ on the same nodes, boundary conditions by
+ * row replacement. H is a linear functional of W, so Θ = T·W with T = S⁻¹R from the thermal
+ * rows (no λ there). The system is A·W = λ·B·W, linear in λ because both Ra and Ma scale with
+ * ΔT; only the interior rows (buoyancy) and the tangential-stress row (thermocapillarity) of B
+ * are non-zero, so the non-zero eigenvalues μ = 1/λ of A⁻¹B are those of the small matrix
+ * K = B_I·A⁻¹·E_I (I = non-zero rows). K is 1×1 for pure thermocapillarity. The answer is
+ * 1/μ for the largest positive real μ, i.e. the smallest positive λ: a stationary neutral mode.
+ * Complex μ (oscillatory onset) are not stationary and are skipped.
+ *
+ * ## References
+ * - Pearson, J. R. A. (1958) J. Fluid Mech. 4, 489–500. doi:10.1017/S0022112058000616
+ * - Nield, D. A. (1964) J. Fluid Mech. 19, 341–352. doi:10.1017/S0022112064000763
+ * - Takashima, M. (1981) "Surface tension driven instability in a horizontal liquid layer with a
+ *   deformable free surface. I. Stationary convection", J. Phys. Soc. Japan 50, 2745–2750.
+ *   doi:10.1143/JPSJ.50.2745
+ * - Davis, S. H. (1987) "Thermocapillary instabilities", Annu. Rev. Fluid Mech. 19, 403–435.
+ *   doi:10.1146/annurev.fl.19.010187.002155
+ * - VanHook, S. J. et al. (1997) J. Fluid Mech. 345, 45–78. doi:10.1017/S0022112097006101
+ * - Trefethen, L. N. (2000) Spectral Methods in MATLAB, SIAM (collocation, row replacement).
+ *
+ * @param problem - checked problem (see validateProblem)
+ * @param grid - collocation grid (see chebyshevCollocation)
+ * @param wavenumber - k [1/d], finite > 0
+ * @returns λ(k) [-] > 0, or Infinity when no stationary neutral mode exists along the ray
+ * @example marginalFactorAt(validateProblem({bottom:'rigid',bottomThermal:'conducting',top:'rigid',biot:Infinity,rayleigh:1000,marangoni:0}), chebyshevCollocation(20), 3.117) // ≈ 1.7078
+ */
+export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevCollocation, wavenumber: number): number {
+  const { size: n, d1, d2, d3, d4 } = grid;
+  const k2 = wavenumber * wavenumber;
+  const k4 = k2 * k2;
+  const last = n - 1;
+  const surface = problem.top === 'surface';
+  const hasMarangoni = surface && problem.marangoni !== 0;
+  const hasBuoyancy = problem.rayleigh !== 0;
+  if (!hasMarangoni && !hasBuoyancy) return Infinity;
+
+  // Surface deflection H = h·W (row vector); zero for a flat surface.
+  const deformable = surface && problem.crispation > 0;
+  const h = new Float64Array(n);
+  if (deformable) {
+    const scale = problem.crispation / (k2 * (problem.bond + k2));
+    for (let j = 0; j < n; j++) h[j] = scale * (d3[j] - 3 * k2 * d1[j]);
+  }
+
+  // Thermal operator: S·Θ = R·W  ⇒  Θ = T·W.
+  const s = new Float64Array(n * n);
+  const r = new Float64Array(n * n);
+  for (let i = 1; i < last; i++) {
+    for (let j = 0; j < n; j++) s[i * n + j] = d2[i * n + j];
+    s[i * n + i] -= k2;
+    r[i * n + i] = -1;
+  }
+  if (problem.biot === Infinity) {
+    s[0] = 1;
+    for (let j = 0; j < n; j++) r[j] = h[j];
+  } else {
+    for (let j = 0; j < n; j++) {
+      s[j] = d1[j];
+      r[j] = problem.biot * h[j];
+    }
+    s[0] += problem.biot;
+  }
+  if (problem.insulatingBottom) for (let j = 0; j < n; j++) s[last * n + j] = d1[last * n + j];
+  else s[last * n + last] = 1;
+  const t = solveLinearSystems(s, n, r, n);
+  if (t === null) return Infinity;
+
+  // Mechanical operator A (row replacement for the four boundary conditions).
+  const a = new Float64Array(n * n);
+  for (let i = 2; i < last - 1; i++) {
+    for (let j = 0; j < n; j++) a[i * n + j] = d4[i * n + j] - 2 * k2 * d2[i * n + j];
+    a[i * n + i] += k4;
+  }
+  a[0] = 1; // W(1) = 0
+  const topSecond = problem.top === 'rigid' ? d1 : d2; // DW(1) = 0 or D²W(1) = (Marangoni term)
+  for (let j = 0; j < n; j++) a[n + j] = topSecond[j];
+  const bottomSecond = problem.rigidBottom ? d1 : d2;
+  for (let j = 0; j < n; j++) a[(last - 1) * n + j] = bottomSecond[last * n + j];
+  a[last * n + last] = 1; // W(0) = 0
+
+  // Non-zero rows of B.
+  const rows: number[] = [];
+  if (hasMarangoni) rows.push(1);
+  if (hasBuoyancy) for (let i = 2; i < last - 1; i++) rows.push(i);
+  const m = rows.length;
+  const c = new Float64Array(m * n);
+  for (let q = 0; q < m; q++) {
+    const i = rows[q];
+    if (i === 1) {
+      const f = -problem.marangoni * k2;
+      for (let j = 0; j < n; j++) c[q * n + j] = f * (t[j] - h[j]);
+    } else {
+      const f = problem.rayleigh * k2;
+      for (let j = 0; j < n; j++) c[q * n + j] = f * t[i * n + j];
+    }
+  }
+  const e = new Float64Array(n * m);
+  for (let q = 0; q < m; q++) e[rows[q] * m + q] = 1;
+  const x = solveLinearSystems(a, n, e, m);
+  if (x === null) return Infinity;
+  const kmat = new Float64Array(m * m);
+  for (let p = 0; p < m; p++) {
+    for (let j = 0; j < n; j++) {
+      const cpj = c[p * n + j];
+      if (cpj === 0) continue;
+      for (let q = 0; q < m; q++) kmat[p * m + q] += cpj * x[j * m + q];
+    }
+  }
+  const eig = matrixEigenvalues(kmat, m);
+  if (eig === null) return Infinity;
+  let best = 0;
+  for (let i = 0; i < m; i++) {
+    const mu = eig.re[i];
+    if (mu > best && Math.abs(eig.im[i]) <= REAL_TOLERANCE * mu) best = mu;
+  }
+  const lambda = 1 / best;
+  return Number.isFinite(lambda) && lambda > 0 ? lambda : Infinity;
+}

@@ -1,0 +1,155 @@
+/** Minimum of λ(k) over the wavenumber. */
+export interface MarginalMinimum {
+  /** Smallest λ found [-]; Infinity if λ(k) is infinite at every wavenumber tried. */
+  readonly factor: number;
+  /** Wavenumber of that minimum [1/d]; 0 when the minimum is the k → 0 limit; NaN if factor is infinite. */
+  readonly wavenumber: number;
+}
+
+/** Options of minimiseMarginalFactor. */
+export interface MinimiseOptions {
+  /** Wavenumbers of the coarse scan [1/d], increasing, all > 0. */
+  readonly scan: readonly number[];
+  /** Smallest wavenumber the downhill walk may reach before the k → 0 limit is used [1/d]. */
+  readonly smallest: number;
+  /** Largest wavenumber the downhill walk may reach [1/d]. */
+  readonly largest: number;
+  /** λ as k → 0 (for the walk past `smallest`); Infinity when the limit is not finite. */
+  readonly limitAtZero: () => number;
+}
+
+const STEP = 1.6; // ratio between neighbouring wavenumbers in the walk
+const LOG_TOLERANCE = 5e-5; // tolerance on ln k in the refinement (k to about 1e-4 relative)
+const GOLDEN = 0.381_966_011_250_105_1;
+
+/**
+ * Minimise the marginal factor λ(k) over the wavenumber k > 0.
+ *
+ * ## Method
+ * Coarse scan on the given grid; if the best point is at an end, walk on outwards by the ratio
+ * 1.6 while λ keeps falling (towards `largest`, or towards `smallest` and then the k → 0 limit,
+ * which is reported as wavenumber 0). The best point and its two neighbours bracket the minimum,
+ * which Brent's method (golden section with successive parabolic interpolation) refines in ln k
+ * to about 1e-4 relative in k; λ at a smooth minimum is then correct to round-off of the
+ * eigen-solve. Infinite values (no stationary mode at that k) count as "higher than any finite".
+ * A second, deeper local minimum between two coarse points can be missed; the scan is chosen
+ * dense enough for the neutral curves of this solver (one cellular minimum, plus the k → 0 end).
+ *
+ * ## References
+ * - Brent, R. P. (1973) *Algorithms for Minimization without Derivatives*, Prentice-Hall, ch. 5.
+ *
+ * @param evaluate - λ(k) [-] for k [1/d] > 0; may return Infinity, never NaN
+ * @param options - scan grid, walk limits and the k → 0 limit
+ * @returns minimum factor [-] and its wavenumber [1/d] (frozen)
+ * @example minimiseMarginalFactor((k) => (k * k + 1) ** 3 / (k * k), { scan: [0.5, 1, 2], smallest: 0.01, largest: 50, limitAtZero: () => Infinity }) // ≈ { factor: 6.75, wavenumber: 0.7071 }
+ */
+export function minimiseMarginalFactor(evaluate: (wavenumber: number) => number, options: MinimiseOptions): MarginalMinimum {
+  const ks = [...options.scan];
+  const fs = ks.map((k) => evaluate(k));
+  let best = indexOfMinimum(fs);
+  if (!Number.isFinite(fs[best])) {
+    // No stationary mode on the grid: probe much shorter and longer waves before giving up.
+    for (const k of [options.smallest * 4, options.largest / 2, options.largest]) {
+      const f = evaluate(k);
+      if (Number.isFinite(f)) return minimiseMarginalFactor(evaluate, { ...options, scan: [k / STEP, k, k * STEP] });
+    }
+    return Object.freeze({ factor: Infinity, wavenumber: NaN });
+  }
+  // Walk outwards while the end point is the lowest.
+  while (best === ks.length - 1 && ks[best] * STEP <= options.largest) {
+    const k = ks[best] * STEP;
+    ks.push(k);
+    fs.push(evaluate(k));
+    if (fs[fs.length - 1] < fs[best]) best = fs.length - 1;
+    else break;
+  }
+  while (best === 0) {
+    const k = ks[0] / STEP;
+    if (k < options.smallest) {
+      const limit = options.limitAtZero();
+      if (limit <= fs[0]) return Object.freeze({ factor: limit, wavenumber: 0 });
+      break;
+    }
+    ks.unshift(k);
+    fs.unshift(evaluate(k));
+    if (fs[0] < fs[1]) best = 0;
+    else {
+      best = 1;
+      break;
+    }
+  }
+  if (best === 0 || best === ks.length - 1) return Object.freeze({ factor: fs[best], wavenumber: ks[best] });
+  return brent(evaluate, Math.log(ks[best - 1]), Math.log(ks[best]), Math.log(ks[best + 1]), fs[best]);
+}
+
+function indexOfMinimum(values: readonly number[]): number {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] < values[best]) best = i;
+  return best;
+}
+
+/** Brent's localmin on s = ln k within [sa, sc], starting from sb with value fb. */
+function brent(evaluate: (k: number) => number, sa: number, sb: number, sc: number, fb: number): MarginalMinimum {
+  let a = Math.min(sa, sc);
+  let b = Math.max(sa, sc);
+  let x = sb;
+  let w = sb;
+  let v = sb;
+  let fx = fb;
+  let fw = fb;
+  let fv = fb;
+  let d = 0;
+  let e = 0;
+  for (let iter = 0; iter < 60; iter++) {
+    const xm = 0.5 * (a + b);
+    const tol1 = LOG_TOLERANCE;
+    const tol2 = 2 * tol1;
+    if (Math.abs(x - xm) <= tol2 - 0.5 * (b - a)) break;
+    let useGolden = true;
+    if (Math.abs(e) > tol1 && Number.isFinite(fx) && Number.isFinite(fw) && Number.isFinite(fv)) {
+      let r = (x - w) * (fx - fv);
+      let q = (x - v) * (fx - fw);
+      let p = (x - v) * q - (x - w) * r;
+      q = 2 * (q - r);
+      if (q > 0) p = -p;
+      q = Math.abs(q);
+      const eTemp = e;
+      e = d;
+      if (!(Math.abs(p) >= Math.abs(0.5 * q * eTemp) || p <= q * (a - x) || p >= q * (b - x))) {
+        d = p / q;
+        const u = x + d;
+        if (u - a < tol2 || b - u < tol2) d = xm - x >= 0 ? tol1 : -tol1;
+        useGolden = false;
+      }
+    }
+    if (useGolden) {
+      e = x >= xm ? a - x : b - x;
+      d = GOLDEN * e;
+    }
+    const u = Math.abs(d) >= tol1 ? x + d : x + (d >= 0 ? tol1 : -tol1);
+    const fu = evaluate(Math.exp(u));
+    if (fu <= fx) {
+      if (u >= x) a = x;
+      else b = x;
+      v = w;
+      w = x;
+      x = u;
+      fv = fw;
+      fw = fx;
+      fx = fu;
+    } else {
+      if (u < x) a = u;
+      else b = u;
+      if (fu <= fw || w === x) {
+        v = w;
+        w = u;
+        fv = fw;
+        fw = fu;
+      } else if (fu <= fv || v === x || v === w) {
+        v = u;
+        fv = fu;
+      }
+    }
+  }
+  return Object.freeze({ factor: fx, wavenumber: Math.exp(x) });
+}

@@ -1,0 +1,91 @@
+import { buoyancyShare } from './buoyancy-share';
+import { classifyRegime } from './classify-regime';
+import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
+import { criticalFactor } from './critical-factor';
+import { longWaveLimit } from './long-wave-limit';
+import type { OnsetResult, StabilityProblem } from './types';
+import { validateProblem } from './validate-problem';
+
+/**
+ * Onset margin λ* of a heated liquid layer: the smallest positive factor on the temperature
+ * difference (Ra and Ma scaled together; Bi, Cr and Bo fixed) that brings the layer to stationary
+ * onset, with the mode that sets in and its regime.
+ *
+ * ## Method
+ * 1. Cellular problem with a flat surface (crispation ignored): λ(k) from marginalFactor,
+ *    minimised over k (criticalFactor) → cellMargin, cellWavenumber.
+ * 2. Deformable surface (top 'surface', crispation > 0): the long-wave limit λ(k → 0) of the
+ *    deformable problem → longWaveMargin (for Ra = 0 and a rigid conducting bottom it equals
+ *    VanHook et al.'s Ma_LW = (2/3)Ga(1 + Bi); with buoyancy λ_LW = (2/3)Ga(1 + Bi)/(Ma +
+ *    (11/60)Bi·Ra), derived in marginal-factor-at.ts), and the deformable problem minimised over
+ *    k. The most dangerous mode is the lower of the two; it is long-wave when the k → 0 limit
+ *    wins. With a flat surface the cellular result is the answer (its minimum may itself lie at
+ *    k → 0, for example with two insulating walls, reported as wavenumber 0 but not as long-wave
+ *    thinning, which needs a deforming surface).
+ * 3. buoyancyShare at the onset mode (see buoyancyShare) and the regime (see classifyRegime).
+ * λ* ≥ 1 means quiet; λ* scales as 1/ΔT at fixed Bi, Cr, Bo.
+ *
+ * ## References
+ * - Pearson, J. R. A. (1958) J. Fluid Mech. 4, 489–500. doi:10.1017/S0022112058000616
+ * - Nield, D. A. (1964) J. Fluid Mech. 19, 341–352. doi:10.1017/S0022112064000763
+ * - Davis, S. H. (1987) Annu. Rev. Fluid Mech. 19, 403–435. doi:10.1146/annurev.fl.19.010187.002155
+ * - VanHook, S. J., Schatz, M. F., Swift, J. B., McCormick, W. D. & Swinney, H. L. (1997)
+ *   "Long-wavelength surface-tension-driven Bénard convection: experiment and theory",
+ *   J. Fluid Mech. 345, 45–78. doi:10.1017/S0022112097006101
+ *
+ * @param problem - boundaries and operating point: rayleigh, marangoni [-] (any sign), biot [-] ≥ 0
+ *                  (Infinity = conducting top), crispation [-] ≥ 0 and bond [-] ≥ 0 (top 'surface')
+ * @returns frozen OnsetResult. margin and cellMargin are Infinity when no stationary onset exists
+ *          along the ray (both drives stabilising, or Ra = Ma = 0); then criticalWavenumber,
+ *          cellWavenumber and buoyancyShare are NaN, mechanism is 'none', regime 'quiet', and
+ *          onsetRayleigh/onsetMarangoni are ±Infinity (0 for a zero drive).
+ * @throws RangeError naming the field when an input is non-finite or out of range
+ * @example onsetMargin({ bottom: 'rigid', bottomThermal: 'conducting', top: 'surface', biot: 0, rayleigh: 0, marangoni: 40 }).margin // ≈ 1.990 (Pearson 79.607/40): quiet
+ */
+export function onsetMargin(problem: StabilityProblem): OnsetResult {
+  const checked = validateProblem(problem);
+  const flat = checked.crispation > 0 ? { ...checked, crispation: 0 } : checked;
+  const cell = criticalFactor(flat, createMarginalFactorEvaluator(flat));
+
+  let margin = cell.factor;
+  let wavenumber = cell.wavenumber;
+  let longWave = false;
+  let longWaveMargin = Infinity;
+  let modeProblem = flat;
+  if (checked.crispation > 0) {
+    const evaluate = createMarginalFactorEvaluator(checked);
+    longWaveMargin = longWaveLimit(evaluate, checked.bond);
+    const deformable = criticalFactor(checked, evaluate, longWaveMargin);
+    modeProblem = checked;
+    if (longWaveMargin <= deformable.factor && Number.isFinite(longWaveMargin)) {
+      margin = longWaveMargin;
+      wavenumber = 0;
+      longWave = true;
+    } else {
+      margin = deformable.factor;
+      wavenumber = deformable.wavenumber;
+    }
+  }
+
+  const finite = Number.isFinite(margin);
+  const share = finite ? buoyancyShare(modeProblem, margin, wavenumber) : NaN;
+  const regime = finite ? classifyRegime({ margin, buoyancyShare: share, longWave }) : 'quiet';
+  const mechanism = finite ? classifyRegime({ margin: 0, buoyancyShare: share, longWave }) : 'none';
+  return Object.freeze({
+    margin,
+    criticalWavenumber: finite ? wavenumber : NaN,
+    longWave,
+    cellMargin: cell.factor,
+    cellWavenumber: Number.isFinite(cell.factor) ? cell.wavenumber : NaN,
+    longWaveMargin,
+    onsetRayleigh: scaleDrive(margin, problem.rayleigh),
+    onsetMarangoni: scaleDrive(margin, problem.marangoni),
+    buoyancyShare: share,
+    regime,
+    mechanism: mechanism === 'quiet' ? 'none' : mechanism,
+  });
+}
+
+function scaleDrive(factor: number, drive: number): number {
+  return drive === 0 ? 0 : factor * drive;
+}
