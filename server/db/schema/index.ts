@@ -1,3 +1,5 @@
 export * from './users';
 export * from './audit';
 export * from './mail';
+export * from './fluids';
+export * from './layer-checks';
