@@ -33,7 +33,7 @@ export function OutboxTable({ messages, busy }: { messages: OutboxMessage[]; bus
           </Button>
         ),
       },
-      { accessorKey: 'toAddress', header: 'To', cell: ({ getValue }) => <span className="break-all">{getValue<string>()}</span> },
+      { accessorKey: 'toAddress', header: 'To', cell: ({ getValue }) => <span className="whitespace-nowrap">{getValue<string>()}</span> },
       { accessorKey: 'subject', header: 'Subject', cell: ({ getValue }) => <span className="font-medium">{getValue<string>()}</span> },
       { accessorKey: 'kind', header: 'Kind', cell: ({ getValue }) => <code className="rounded bg-paper-sunk px-1.5 text-sm">{getValue<string>()}</code> },
       {

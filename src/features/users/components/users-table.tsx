@@ -45,7 +45,7 @@ export function UsersTable({ users, currentUserId, busy }: UsersTableProps) {
           </span>
         ),
       },
-      { accessorKey: 'email', header: 'E-mail', cell: ({ getValue }) => <span className="break-all">{getValue<string>()}</span> },
+      { accessorKey: 'email', header: 'E-mail', cell: ({ getValue }) => <span className="whitespace-nowrap">{getValue<string>()}</span> },
       {
         accessorKey: 'role',
         header: 'Role',
