@@ -16,7 +16,11 @@ export function fieldsFromZodError(error: ZodError): Record<string, string> {
       }
       continue;
     }
-    if (path === '') path = '_';
+    if (path === '') {
+      path = '_';
+      // express.json leaves the body undefined when it is missing or not sent as application/json.
+      if (issue.code === 'invalid_type') message = 'The request body must be a JSON object (Content-Type: application/json).';
+    }
     if (issue.code === 'invalid_type' && /received undefined/.test(message)) message = `${path} is required`;
     fields[path] ??= message;
   }

@@ -129,3 +129,13 @@ describe('bad input on sign-in and user changes', () => {
     expect(zero.body.error.fields.page).toMatch(/at least 1/);
   });
 });
+
+describe('a body that is not JSON', () => {
+  it('answers 400 asking for a JSON object and creates nothing', async () => {
+    const email = uniqueEmail('plain');
+    const response = await agent.post('/api/users/invitations').set('Content-Type', 'text/plain').send(`email=${email}`);
+    expect(response.status).toBe(400);
+    expect(response.body.error.fields._).toMatch(/JSON object/);
+    expect((await writtenFor(email)).invitations).toBe(0);
+  });
+});
