@@ -85,7 +85,7 @@ async function main(): Promise<never> {
       `--outputFile.json=${jsonReport}`,
       ...process.argv.slice(2),
     ],
-    { cwd: projectRoot, stdio: 'inherit', env: { ...process.env, FORCE_COLOR: process.env.FORCE_COLOR ?? (process.env.CI ? '0' : '1') } },
+    { cwd: projectRoot, stdio: 'inherit' },
   );
   const vitestExit = await new Promise<number>((resolve) => vitest!.on('exit', (code) => resolve(code ?? 1)));
 

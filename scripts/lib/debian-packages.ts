@@ -28,13 +28,15 @@ function run(command: string, args: string[]): void {
 export function installDebianPackages(packages: string[], why: string): void {
   const aptArgs = ['install', '-y', '--no-install-recommends', ...packages];
   const manualCommand = `sudo apt-get update && sudo apt-get install -y --no-install-recommends ${packages.join(' ')}`;
-  console.log(`Installing ${packages.join(', ')} with apt-get (${why}) …`);
+  const announce = () => console.log(`Installing ${packages.join(', ')} with apt-get (${why}) …`);
   if (isRoot()) {
+    announce();
     run('apt-get', ['update']);
     run('apt-get', aptArgs);
     return;
   }
   if (canUseSudoWithoutPrompt()) {
+    announce();
     run('sudo', ['-n', 'apt-get', 'update']);
     run('sudo', ['-n', 'apt-get', ...aptArgs]);
     return;
