@@ -19,6 +19,7 @@ import { registerHealthRoutes } from './features/health/health.routes';
 import { registerInvitationsRoutes } from './features/invitations/invitations.routes';
 import { registerOutboxRoutes } from './features/outbox/outbox.routes';
 import { registerUsersRoutes } from './features/users/users.routes';
+import { registerFluidsRoutes } from './features/fluids/fluids.routes';
 
 /** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
 export const JSON_BODY_LIMIT = '1mb';
@@ -76,6 +77,7 @@ export function createApp(input: CreateAppDeps): Express {
   registerUsersRoutes(api);
   registerAuditRoutes(api);
   registerOutboxRoutes(api);
+  registerFluidsRoutes(api);
   app.use(api.router);
   app.use('/api', apiNotFound);
 

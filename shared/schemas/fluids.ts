@@ -219,7 +219,7 @@ export type FluidListQuery = z.input<typeof fluidListQuerySchema>;
 
 /** CSV import: the file's text in JSON (the page reads the chosen file). */
 export const fluidCsvImportInputSchema = z.strictObject({
-  csv: z.string({ error: 'csv is required' }).min(1, 'the file is empty').max(2_000_000, 'the file is larger than 2 MB'),
+  csv: z.string({ error: 'csv is required' }).min(1, 'the file is empty').max(900_000, 'the file is larger than 900 kB; split it'),
 });
 export const csvLineErrorSchema = z.object({
   /** 1-based line number in the file (the header is line 1). */
