@@ -34,5 +34,7 @@ export function dynamicBondNumber(input: {
   const beta = requireFinite('expansion', input.expansion, '1/K');
   const d = requirePositive('depth', input.depth, 'm');
   const slope = requireFinite('surfaceTensionSlope', input.surfaceTensionSlope, 'N/(m·K)');
-  return (rho * g * beta * d * d) / -slope;
+  const buoyant = rho * g * beta * d * d;
+  if (slope === 0) return buoyant === 0 ? NaN : Math.sign(buoyant) * Infinity;
+  return buoyant / -slope;
 }
