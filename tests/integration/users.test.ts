@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, notInArray } from 'drizzle-orm';
 import { auditEvents, users } from '../../server/db/schema';
 import { createScratchDatabase, type ScratchDatabase } from '../setup/scratch-database';
 import { createTestContext, type TestContext } from './helpers/test-app';
@@ -132,5 +132,29 @@ describe('the last active administrator (own database, one administrator in it)'
     expect(deactivateLast.status).toBe(422);
     const [row] = await local.db.select().from(users).where(eq(users.id, dormant.id));
     expect(row).toMatchObject({ role: 'administrator', active: true });
+  });
+
+  it('lets only one of two administrators demoting each other at the same moment succeed', async () => {
+    const first = await createTestUser(local.db, { role: 'administrator' });
+    const second = await createTestUser(local.db, { role: 'administrator' });
+    // Leave exactly these two active administrators.
+    await local.db
+      .update(users)
+      .set({ active: false })
+      .where(and(eq(users.role, 'administrator'), notInArray(users.id, [first.id, second.id])));
+    const [a, b] = await Promise.all([signedInAgent(local.app, first), signedInAgent(local.app, second)]);
+
+    const results = await Promise.all([
+      a.patch(`/api/users/${second.id}`).send({ role: 'engineer' }),
+      b.patch(`/api/users/${first.id}`).send({ role: 'engineer' }),
+    ]);
+
+    // The loser is refused either by the rule (422) or, if the winner committed before its
+    // role check ran, because it is no longer an administrator (403). Never both succeed.
+    const statuses = results.map((r) => r.status).sort();
+    expect(statuses[0]).toBe(200);
+    expect([403, 422]).toContain(statuses[1]);
+    const rows = await local.db.select().from(users).where(and(eq(users.role, 'administrator'), eq(users.active, true)));
+    expect(rows).toHaveLength(1);
   });
 });
