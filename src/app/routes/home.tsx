@@ -24,7 +24,7 @@ export function HomeRoute() {
           </>
         }
       />
-      <div className={places.length > 0 ? 'grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]' : 'max-w-3xl'}>
+      <div className={places.length > 0 ? 'grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]' : 'max-w-3xl'}>
         <section aria-labelledby="role-title" className="rounded-md border border-slate-line bg-paper-raised p-5">
           <h2 id="role-title" className="text-lg font-semibold">
             Your part as {roleLabels[me.role]}

@@ -18,7 +18,7 @@ const sortMarks = { asc: '▲', desc: '▼' } as const;
 export function DataTable<T>({ table, caption, renderExpanded, renderRowNote, busy }: DataTableProps<T>) {
   const columnCount = table.getVisibleLeafColumns().length;
   return (
-    <div className="overflow-x-auto rounded-md border border-slate-line bg-paper-raised" aria-busy={busy || undefined}>
+    <div className="overflow-x-auto rounded-md border border-slate-line bg-paper-raised print:overflow-visible" aria-busy={busy || undefined}>
       <table className={cn('w-full border-collapse text-left text-[0.95rem]', busy && 'opacity-70')}>
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-sunk">
@@ -32,7 +32,7 @@ export function DataTable<T>({ table, caption, renderExpanded, renderRowNote, bu
                     key={header.id}
                     scope="col"
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                    className="border-b border-slate-line px-3 py-2.5 text-sm font-semibold whitespace-nowrap text-ink-soft"
+                    className={cn('border-b border-slate-line px-3 py-2.5 text-sm font-semibold whitespace-nowrap text-ink-soft', header.column.columnDef.meta?.className)}
                   >
                     {header.column.getCanSort() ? (
                       <button
@@ -41,7 +41,7 @@ export function DataTable<T>({ table, caption, renderExpanded, renderRowNote, bu
                         className="inline-flex min-h-8 items-center gap-1 rounded hover:text-ink"
                       >
                         {label}
-                        <span aria-hidden="true" className="text-[0.7em]">
+                        <span aria-hidden="true" className="text-[0.7em] print:hidden">
                           {sorted ? sortMarks[sorted] : '↕'}
                         </span>
                       </button>
@@ -61,7 +61,7 @@ export function DataTable<T>({ table, caption, renderExpanded, renderRowNote, bu
               <Fragment key={row.id}>
                 <tr className={cn('border-b border-slate-line/70 align-middle last:border-b-0', row.getIsExpanded() && 'bg-brand-light/30')}>
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-3 py-2">
+                    <td key={cell.id} className={cn('px-3 py-2', cell.column.columnDef.meta?.className)}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}

@@ -42,7 +42,7 @@ function UsersPage() {
   return (
     <>
       <PageHeader title="Users" lead="Everyone who can sign in to this site, their role and whether their account is active." />
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-label="User list" className="flex min-w-0 flex-col gap-4">
           <SearchBox label="Find by name or e-mail" value={params.q ?? ''} onSearch={(q) => setSearch(withParams(search, { q }))} />
           {users.isPending ? (

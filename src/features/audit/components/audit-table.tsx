@@ -3,6 +3,7 @@ import { useMemo, useState } from 'react';
 import type { AuditEvent } from '../../../../shared/schemas/audit';
 import { Button } from '../../../components/ui/button';
 import { DataTable } from '../../../components/ui/data-table';
+import { EmailText } from '../../../components/ui/email-text';
 import { formatDateTime } from '../../../utils/format';
 import { changedKeys } from './changed-keys';
 
@@ -56,6 +57,7 @@ export function AuditTable({ events, busy }: { events: AuditEvent[]; busy?: bool
         id: 'expand',
         header: () => <span className="sr-only">Details</span>,
         enableSorting: false,
+        meta: { className: 'no-print' },
         cell: ({ row }) => (
           <Button
             size="sm"
@@ -74,7 +76,7 @@ export function AuditTable({ events, busy }: { events: AuditEvent[]; busy?: bool
         header: 'Actor',
         cell: ({ getValue }) => {
           const email = getValue<string | null>();
-          return email ? <span className="break-all">{email}</span> : <span className="text-ink-soft">System</span>;
+          return email ? <EmailText email={email} /> : <span className="text-ink-soft">System</span>;
         },
       },
       { accessorKey: 'action', header: 'Action', cell: ({ getValue }) => <code className="rounded bg-paper-sunk px-1.5 text-sm">{getValue<string>()}</code> },
@@ -91,6 +93,7 @@ export function AuditTable({ events, busy }: { events: AuditEvent[]; busy?: bool
       {
         accessorKey: 'reason',
         header: 'Reason',
+        meta: { className: 'hidden md:table-cell print:table-cell' },
         cell: ({ getValue }) => getValue<string | null>() ?? <span className="text-ink-soft">—</span>,
       },
     ],

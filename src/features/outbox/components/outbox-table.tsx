@@ -3,6 +3,7 @@ import { useMemo, useState } from 'react';
 import type { OutboxMessage } from '../../../../shared/schemas/outbox';
 import { Button } from '../../../components/ui/button';
 import { DataTable } from '../../../components/ui/data-table';
+import { EmailText } from '../../../components/ui/email-text';
 import { StatusBadge, type StatusTone } from '../../../components/ui/status-badge';
 import { formatDateTime } from '../../../utils/format';
 
@@ -21,6 +22,7 @@ export function OutboxTable({ messages, busy }: { messages: OutboxMessage[]; bus
         id: 'expand',
         header: () => <span className="sr-only">Message text</span>,
         enableSorting: false,
+        meta: { className: 'no-print' },
         cell: ({ row }) => (
           <Button
             size="sm"
@@ -33,15 +35,15 @@ export function OutboxTable({ messages, busy }: { messages: OutboxMessage[]; bus
           </Button>
         ),
       },
-      { accessorKey: 'toAddress', header: 'To', cell: ({ getValue }) => <span className="whitespace-nowrap">{getValue<string>()}</span> },
+      { accessorKey: 'toAddress', header: 'To', cell: ({ getValue }) => <EmailText email={getValue<string>()} /> },
       { accessorKey: 'subject', header: 'Subject', cell: ({ getValue }) => <span className="font-medium">{getValue<string>()}</span> },
-      { accessorKey: 'kind', header: 'Kind', cell: ({ getValue }) => <code className="rounded bg-paper-sunk px-1.5 text-sm">{getValue<string>()}</code> },
+      { accessorKey: 'kind', header: 'Kind', meta: { className: 'hidden lg:table-cell print:table-cell' }, cell: ({ getValue }) => <code className="rounded bg-paper-sunk px-1.5 text-sm">{getValue<string>()}</code> },
       {
         accessorKey: 'status',
         header: 'Status',
         cell: ({ row }) => <StatusBadge tone={statusWords[row.original.status].tone}>{statusWords[row.original.status].word}</StatusBadge>,
       },
-      { accessorKey: 'attempts', header: 'Attempts', cell: ({ getValue }) => <span className="block text-right">{getValue<number>()}</span> },
+      { accessorKey: 'attempts', header: 'Attempts', meta: { className: 'hidden lg:table-cell print:table-cell' }, cell: ({ getValue }) => <span className="block text-right">{getValue<number>()}</span> },
       {
         accessorKey: 'lastError',
         header: 'Last error',

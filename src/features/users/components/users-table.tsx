@@ -4,6 +4,7 @@ import { roleLabels, roleValues, type Role } from '../../../../shared/schemas/ro
 import type { User } from '../../../../shared/schemas/users';
 import { Button } from '../../../components/ui/button';
 import { DataTable } from '../../../components/ui/data-table';
+import { EmailText } from '../../../components/ui/email-text';
 import { Notice } from '../../../components/ui/notice';
 import { StatusBadge } from '../../../components/ui/status-badge';
 import { formatDateTime } from '../../../utils/format';
@@ -45,7 +46,7 @@ export function UsersTable({ users, currentUserId, busy }: UsersTableProps) {
           </span>
         ),
       },
-      { accessorKey: 'email', header: 'E-mail', cell: ({ getValue }) => <span className="whitespace-nowrap">{getValue<string>()}</span> },
+      { accessorKey: 'email', header: 'E-mail', cell: ({ getValue }) => <EmailText email={getValue<string>()} /> },
       {
         accessorKey: 'role',
         header: 'Role',
@@ -74,10 +75,11 @@ export function UsersTable({ users, currentUserId, busy }: UsersTableProps) {
         header: 'Status',
         cell: ({ row }) => (row.original.active ? <StatusBadge tone="quiet">Active</StatusBadge> : <StatusBadge tone="neutral">Deactivated</StatusBadge>),
       },
-      { accessorKey: 'createdAt', header: 'Added', cell: ({ getValue }) => <span className="whitespace-nowrap">{formatDateTime(getValue<string>())}</span> },
+      { accessorKey: 'createdAt', header: 'Added', meta: { className: 'hidden xl:table-cell' }, cell: ({ getValue }) => <span className="whitespace-nowrap">{formatDateTime(getValue<string>())}</span> },
       {
         id: 'actions',
         header: () => <span className="sr-only">Actions</span>,
+        meta: { className: 'no-print' },
         enableSorting: false,
         cell: ({ row }) => {
           const user = row.original;
