@@ -5,7 +5,9 @@
  * A finite long-wave limit behaves as λ(k) = λ₀ + c·k² + O(k⁴) (the problem depends on k
  * through k² only), so Richardson extrapolation λ₀ ≈ (4λ(k₁) − λ(2k₁))/3 removes the k² term.
  * On a deformable surface the relevant small scale is k² ≪ Bo (gravity against surface tension),
- * so k₁ = 10⁻³·min(1, √Bo), but not below 10⁻⁶. A limit that diverges (λ(k₁) > 1.5·λ(2k₁),
+ * so k₁ = 10⁻³·min(1, √Bo), but not below 10⁻⁴ (smaller k loses digits to the near-singular
+ * heat operator of an insulating layer; the Richardson step removes the k²/Bo term exactly).
+ * A limit that diverges (λ(k₁) > 1.5·λ(2k₁),
  * as for λ ∝ 1/k² when a boundary holds the temperature) is reported as Infinity. A limit
  * that tends to 0 (no gravity) is reported as 0.
  *
@@ -20,7 +22,7 @@
  * @example longWaveLimit((k) => 48 + 3 * k * k, 1) // ≈ 48
  */
 export function longWaveLimit(evaluate: (wavenumber: number) => number, bond: number): number {
-  const k1 = Math.max(1e-6, 1e-3 * Math.min(1, Math.sqrt(bond)));
+  const k1 = Math.max(1e-4, 1e-3 * Math.min(1, Math.sqrt(bond)));
   const near = evaluate(k1);
   const far = evaluate(2 * k1);
   if (!Number.isFinite(near) || !Number.isFinite(far)) return Infinity;

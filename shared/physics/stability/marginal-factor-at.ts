@@ -5,6 +5,8 @@ import type { CheckedProblem } from './validate-problem';
 
 /** Relative size of an imaginary part below which an eigenvalue counts as real (round-off splits double roots). */
 const REAL_TOLERANCE = 1e-6;
+/** Relative size below which the weaker drive is dropped. */
+const NEGLIGIBLE_DRIVE = 1e-13;
 
 /**
  * Marginal factor λ(k) of a checked problem on a given collocation grid (the solver's kernel).
@@ -67,8 +69,18 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
   const k4 = k2 * k2;
   const last = n - 1;
   const surface = problem.top === 'surface';
-  const hasMarangoni = surface && problem.marangoni !== 0;
-  const hasBuoyancy = problem.rayleigh !== 0;
+  // Only the direction of (Ra, Ma) matters for the eigenvectors: solve with the drives divided by
+  // their larger magnitude (keeps tiny or huge drives away from under- and overflow), then rescale.
+  const driveScale = Math.max(Math.abs(problem.rayleigh), surface ? Math.abs(problem.marangoni) : 0);
+  if (!(driveScale > 0)) return Infinity;
+  // A drive 1e-13 times smaller than the other changes λ by less than round-off: drop it, which
+  // also keeps sub-normal numbers (very slow arithmetic) out of the eigen-solve.
+  const rayleigh = Math.abs(problem.rayleigh) >= NEGLIGIBLE_DRIVE * driveScale ? problem.rayleigh / driveScale : 0;
+  const marangoni = Math.abs(problem.marangoni) >= NEGLIGIBLE_DRIVE * driveScale ? problem.marangoni / driveScale : 0;
+  // A conducting surface (Bi = ∞) holds Θ(1) = H exactly: no surface-temperature perturbation and
+  // no thermocapillary stress, so the Marangoni row is dropped rather than left as round-off.
+  const hasMarangoni = surface && marangoni !== 0 && problem.biot !== Infinity;
+  const hasBuoyancy = rayleigh !== 0;
   if (!hasMarangoni && !hasBuoyancy) return Infinity;
 
   // Surface deflection H = h·W (row vector); zero for a flat surface.
@@ -124,10 +136,10 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
   for (let q = 0; q < m; q++) {
     const i = rows[q];
     if (i === 1) {
-      const f = -problem.marangoni * k2;
+      const f = -marangoni * k2;
       for (let j = 0; j < n; j++) c[q * n + j] = f * (t[j] - h[j]);
     } else {
-      const f = problem.rayleigh * k2;
+      const f = rayleigh * k2;
       for (let j = 0; j < n; j++) c[q * n + j] = f * t[i * n + j];
     }
   }
@@ -150,6 +162,6 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
     const mu = eig.re[i];
     if (mu > best && Math.abs(eig.im[i]) <= REAL_TOLERANCE * mu) best = mu;
   }
-  const lambda = 1 / best;
+  const lambda = 1 / best / driveScale;
   return Number.isFinite(lambda) && lambda > 0 ? lambda : Infinity;
 }

@@ -26,7 +26,8 @@ const GOLDEN = 0.381_966_011_250_105_1;
  * Minimise the marginal factor λ(k) over the wavenumber k > 0.
  *
  * ## Method
- * Coarse scan on the given grid; if the best point is at an end, walk on outwards by the ratio
+ * Coarse scan on the given grid (if λ is infinite at every point, three probes at 4·smallest,
+ * k = 7 and k = 12 look for a stationary branch outside the grid); if the best point is at an end, walk on outwards by the ratio
  * 1.6 while λ keeps falling (towards `largest`, or towards `smallest` and then the k → 0 limit,
  * which is reported as wavenumber 0). The best point and its two neighbours bracket the minimum,
  * which Brent's method (golden section with successive parabolic interpolation) refines in ln k
@@ -49,7 +50,7 @@ export function minimiseMarginalFactor(evaluate: (wavenumber: number) => number,
   let best = indexOfMinimum(fs);
   if (!Number.isFinite(fs[best])) {
     // No stationary mode on the grid: probe much shorter and longer waves before giving up.
-    for (const k of [options.smallest * 4, options.largest / 2, options.largest]) {
+    for (const k of [options.smallest * 4, Math.min(7, options.largest), Math.min(12, options.largest)]) {
       const f = evaluate(k);
       if (Number.isFinite(f)) return minimiseMarginalFactor(evaluate, { ...options, scan: [k / STEP, k, k * STEP] });
     }
