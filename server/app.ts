@@ -64,6 +64,8 @@ export function createApp(input: CreateAppDeps): Express {
         res.setHeader('X-Request-Id', id);
         return id;
       },
+      // Who made the request, once defineRoute has loaded the session (read when the response ends).
+      customProps: (_req, res) => ({ userId: (res as express.Response).locals?.user?.id }),
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
