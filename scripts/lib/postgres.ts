@@ -178,9 +178,15 @@ function postgresSystemUser(): { uid: number; gid: number } {
   return { uid: Number(uid), gid: Number(gid) };
 }
 
+/** Parent folders this creates stay 0755 (mkdir's `mode` would make them 0700 and unreachable for `postgres`). */
+function makeParentsTraversable(dataDir: string): void {
+  mkdirSync(dirname(dataDir), { recursive: true, mode: 0o755 });
+}
+
 /** Creates the folder for the postgres user and checks that it can really reach and write it. */
 function makeDataDirForPostgresUser(dataDir: string): boolean {
   const { uid, gid } = postgresSystemUser();
+  makeParentsTraversable(dataDir);
   mkdirSync(dataDir, { recursive: true, mode: 0o700 });
   chownSync(dataDir, uid, gid);
   chmodSync(dataDir, 0o700);
@@ -198,6 +204,7 @@ function makeDataDirForPostgresUser(dataDir: string): boolean {
 function prepareDataDir(log: (message: string) => void): string {
   const preferred = resolve(projectRoot, process.env.PGDATA_DIR || DEFAULT_DATA_DIR);
   if (!isRoot()) {
+    makeParentsTraversable(preferred);
     mkdirSync(preferred, { recursive: true, mode: 0o700 });
     return preferred;
   }
