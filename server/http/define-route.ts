@@ -36,7 +36,7 @@ type IsPublic<A extends Action> = (typeof policy)[A] extends 'public' ? true : f
 
 export interface RouteContext<A extends Action> extends AppDeps {
   session: Session;
-  /** The signed-in person; null only on public routes when nobody (valid) is signed in. */
+  /** The signed-in person on non-public routes; always null on public routes (they do not load the user). */
   user: IsPublic<A> extends true ? CurrentUser | null : CurrentUser;
   requestId: string;
 }
@@ -78,7 +78,9 @@ export function defineRoute<A extends Action>(api: ApiRouter, spec: RouteSpec<A>
   const guarded = async (req: Request, res: Response) => {
     const session = await loadSession(req, res, options);
     let user: CurrentUser | null = null;
-    if (session.userId) {
+    // Public routes never touch the users table, so /api/health still answers with a cookie
+    // while the database is down; their handlers get user = null.
+    if (!isPublicAction(spec.action) && session.userId) {
       if (isSessionExpired(session, deps.env.SESSION_TTL_SECONDS)) {
         session.destroy();
       } else {

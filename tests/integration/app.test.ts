@@ -122,3 +122,21 @@ describe('when the database is down', () => {
     expect(JSON.stringify(response.body)).not.toMatch(/ECONNREFUSED|127\.0\.0\.1|stack/);
   });
 });
+
+describe('health with a session cookie while the database is down', () => {
+  it('still answers with the health body', async () => {
+    const { sealData } = await import('iron-session');
+    const down = createTestContext({ databaseUrl: 'postgres://postgres@127.0.0.1:9/quietlayer' });
+    try {
+      const seal = await sealData(
+        { userId: '5b0c1f7e-2a9d-4c3e-9f7a-000000000001', issuedAt: Date.now() },
+        { password: down.env.SESSION_SECRET, ttl: 3600 },
+      );
+      const response = await request(down.app).get('/api/health').set('Cookie', `quietlayer_session=${seal}`);
+      expect(response.status).toBe(503);
+      expect(response.body).toEqual({ status: 'degraded', database: 'down' });
+    } finally {
+      await down.close();
+    }
+  });
+});
