@@ -121,7 +121,8 @@ function refineCrossing(
  * @param input - the Drying path input, SI units (see DryingPathInput)
  * @returns series on the plotting grid, events, zone summaries, onset verdict, mass balance, warnings
  *   and integrator counters; throws RangeError naming the field for bad input
- * @example computeDryingPath(demoLine2DryingInput()).onset.verdict // one of 'quiet' | 'cells-die-out' | 'pattern-possible' | 'pattern-expected'
+ * @example computeDryingPath(demoLine2DryingInput()).onset.verdict
+ * // 'pattern-expected' (solutal cells from the start; the film freezes at ≈ 10.9 s, 5.46 m in)
  */
 export function computeDryingPath(input: DryingPathInput): DryingPathResult {
   const path = prepareDryingPath(input);

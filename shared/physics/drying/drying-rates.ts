@@ -51,8 +51,10 @@ export interface DryingRates {
  * @param zone - the zone the film is in
  * @param y - state [h [m], φ [-], T_f [K]]
  * @returns derivative, flux, Crank's L, diffusivity, vapour pressure and upward heat flux
- * @example dryingRates(prepareDryingPath(demoLine2DryingInput()), prepareDryingPath(demoLine2DryingInput()).zones[0], [60e-6, 0.35, 300]).flux
- * // a positive evaporation flux [kg/(m²·s)]
+ * @example
+ * const path = prepareDryingPath(demoLine2DryingInput());
+ * dryingRates(path, path.zones[0], [40e-6, 0.35, 298.15]).flux
+ * // ≈ 1.341e-3 kg/(m²·s) (toluene-like solvent, p_sat ≈ 3.79 kPa at 25 °C, Crank's L ≈ 0.458)
  */
 export function dryingRates(path: PreparedDryingPath, zone: PreparedZone, y: readonly number[]): DryingRates {
   const { solvent, film, substrate } = path.input;

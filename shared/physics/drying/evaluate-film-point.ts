@@ -63,7 +63,11 @@ function fromTable(marangoni: number, critical: number): Margin {
  * @param y - state [h [m], φ [-], T_f [K]]
  * @param tables - memoised critical-value tables of this path
  * @returns the evaluated point
- * @example evaluateFilmPoint(path, path.zones[0], [50e-6, 0.4, 300], tables).solutalMargin // margin [-]
+ * @example
+ * const path = prepareDryingPath(demoLine2DryingInput());
+ * const tables = { thermal: createCriticalMarangoniTable('conducting'), solutal: createCriticalMarangoniTable('insulating') };
+ * evaluateFilmPoint(path, path.zones[0], [40e-6, 0.35, 298.15], tables).solutalMargin
+ * // ≈ 0.0471 (Ma_c ≈ 1602 against a critical ≈ 75 at L ≈ 0.458): surface-tension cells
  */
 export function evaluateFilmPoint(
   path: PreparedDryingPath,
