@@ -26,13 +26,15 @@ export interface MarginSurrogate {
  *
  * ## Method
  * Variables xₖ = ln(factorₖ) on a box of ± spanSigma·u (normal; factor floored at 0.05) or ± u
- * (uniform). Model ln M = c₀ + Σ cₖxₖ + Σ_{k≤j} c_kj xₖxⱼ (exact for products of power laws such as
- * Ma = |dσ/dT|ΔT d/(μκ), and smooth where one mode sets the margin). Design: the centre, the 2K
- * axial points and seeded uniform points up to 2× the number of coefficients, solved by Householder
- * least squares; then `validationPoints` seeded points from another stream compare the surrogate
- * with the full evaluator. Near a switch between onset modes the fit degrades; the validation
- * errors say so and the caller should then use the full evaluator. Margins must be positive and
- * finite at every design point.
+ * (uniform). Model per mode: ln M = c₀ + Σ cₖxₖ + Σ_{k≤j} c_kj xₖxⱼ (exact for products of power
+ * laws such as Ma = |dσ/dT|ΔT d/(μκ)). Onset is set by whichever mode goes first, so the margin is
+ * the smallest of several smooth mode margins with a kink where they cross; `evaluateModes` returns
+ * each mode's margin (NaN where that mode is not determined) and every mode gets its own surface
+ * from the design points where it is determined; the surrogate margin is their minimum. Design: the
+ * centre, the 2K axial points and seeded uniform points up to 2× the number of coefficients,
+ * solved by Householder least squares; `validationPoints` seeded points compare surrogate and full
+ * margins (smallest determined mode). Large validation errors tell the caller to use the full
+ * evaluator instead.
  *
  * ## References
  * - Saltelli A. et al. (2008) "Global Sensitivity Analysis: The Primer", Wiley, ch. 5 (emulators
@@ -43,23 +45,23 @@ export interface MarginSurrogate {
  *
  * @param input.base - nominal property values (SI)
  * @param input.properties - uncertain properties
- * @param input.evaluate - the full (costly) evaluator
+ * @param input.evaluateModes - the full (costly) evaluator: margin of each onset mode, NaN if undetermined
  * @param input.seed - seed for design and validation points
  * @param input.validationPoints - default 24
  * @param input.spanSigma - box half-width in σ for normal properties, default 4
  * @returns the surrogate and its validation errors
  * @example fitMarginSurrogate({ base: { x: 2 }, properties: [{ name: 'x', relativeUncertainty: 0.1,
- *   distribution: 'normal' }], evaluate: (s) => s.x ** 2, seed: 1 }).maxRelativeError // ≈ 0
+ *   distribution: 'normal' }], evaluateModes: (s) => [s.x ** 2], seed: 1 }).maxRelativeError // ≈ 0
  */
 export function fitMarginSurrogate(input: {
   readonly base: Readonly<Record<string, number>>;
   readonly properties: readonly SpreadPropertySpec[];
-  readonly evaluate: SpreadEvaluator;
+  readonly evaluateModes: (sample: Readonly<Record<string, number>>, index: number) => readonly number[];
   readonly seed: number;
   readonly validationPoints?: number;
   readonly spanSigma?: number;
 }): MarginSurrogate {
-  const { base, properties, evaluate } = input;
+  const { base, properties, evaluateModes } = input;
   const spanSigma = input.spanSigma ?? 4;
   const validationPoints = input.validationPoints ?? 24;
   if (!(spanSigma > 0 && spanSigma <= 10)) throw new RangeError(`spanSigma must be > 0 and ≤ 10, got ${spanSigma}`);
@@ -92,14 +94,13 @@ export function fitMarginSurrogate(input: {
     for (let i = 0; i < k; i += 1) sample[properties[i].name] = base[properties[i].name] * Math.exp(x[i]);
     return sample;
   };
-  const logMargin = (x: ArrayLike<number>, index: number): number => {
-    const margin = evaluate(sampleAt(x), index);
-    if (!(margin > 0 && Number.isFinite(margin))) {
-      throw new RangeError(
-        `the response surface needs a positive finite margin at every design point; got ${margin} at design point ${index}`,
-      );
-    }
-    return Math.log(margin);
+  /** Mode margins with undetermined, infinite or non-positive values as NaN. */
+  const modesAt = (x: ArrayLike<number>, index: number): number[] =>
+    evaluateModes(sampleAt(x), index).map((m) => (m > 0 && Number.isFinite(m) ? m : Number.NaN));
+  const smallest = (values: readonly number[]): number => {
+    let m = Number.POSITIVE_INFINITY;
+    for (const v of values) if (v < m) m = v;
+    return m;
   };
 
   const coefficientCount = basis(new Float64Array(k)).length;
@@ -120,21 +121,36 @@ export function fitMarginSurrogate(input: {
   };
   while (design.length < 2 * coefficientCount) design.push(randomPoint());
   const rows = design.map(basis);
-  const values = design.map((x, i) => logMargin(x, -1 - i));
-  const coefficients = solveLeastSquares(rows, values);
+  const designModes = design.map((x, i) => modesAt(x, -1 - i));
+  const modeCount = designModes[0].length;
+  if (modeCount === 0) throw new RangeError('evaluateModes must return at least one mode margin');
 
-  const predictLog = (x: ArrayLike<number>): number => {
+  const fits: number[][] = [];
+  for (let mode = 0; mode < modeCount; mode += 1) {
+    const used = designModes.map((modes, i) => ({ i, y: modes[mode] })).filter((d) => !Number.isNaN(d.y));
+    if (used.length < coefficientCount + 1) continue;
+    fits.push(solveLeastSquares(used.map((d) => rows[d.i]), used.map((d) => Math.log(d.y))));
+  }
+  if (fits.length === 0) {
+    throw new RangeError('the response surface needs a positive finite margin at most design points; no mode had enough');
+  }
+
+  const predict = (x: ArrayLike<number>): number => {
     const row = basis(x);
-    let s = 0;
-    for (let i = 0; i < row.length; i += 1) s += row[i] * coefficients[i];
-    return s;
+    let best = Number.POSITIVE_INFINITY;
+    for (const c of fits) {
+      let s = 0;
+      for (let i = 0; i < row.length; i += 1) s += row[i] * c[i];
+      if (s < best) best = s;
+    }
+    return Math.exp(best);
   };
   const names = properties.map((p) => p.name);
   const baseValues = properties.map((p) => base[p.name]);
   const x = new Float64Array(k);
   const surrogate: SpreadEvaluator = (sample) => {
     for (let i = 0; i < k; i += 1) x[i] = Math.log(sample[names[i]] / baseValues[i]);
-    return Math.exp(predictLog(x));
+    return predict(x);
   };
 
   let maxRelativeError = 0;
@@ -142,9 +158,9 @@ export function fitMarginSurrogate(input: {
   let onsetDisagreements = 0;
   for (let v = 0; v < validationPoints; v += 1) {
     const point = randomPoint();
-    const full = Math.exp(logMargin(point, -1 - design.length - v));
-    const fitted = Math.exp(predictLog(point));
-    const relative = Math.abs(fitted / full - 1);
+    const full = smallest(modesAt(point, -1 - design.length - v));
+    const fitted = predict(point);
+    const relative = Number.isFinite(full) ? Math.abs(fitted / full - 1) : Number.POSITIVE_INFINITY;
     maxRelativeError = Math.max(maxRelativeError, relative);
     sumSquares += relative * relative;
     if (full < 1 !== fitted < 1) onsetDisagreements += 1;

@@ -37,7 +37,7 @@ describe('fitMarginSurrogate', () => {
     (80 * s.viscosity * (s.conductivity / 2e6)) / (Math.abs(s.dSigmaDT) * s.depth * 1.5);
 
   it('reproduces a product of power laws to rounding, and says so in its validation', () => {
-    const fit = fitMarginSurrogate({ base, properties: props, evaluate: powerLaw, seed: 3 });
+    const fit = fitMarginSurrogate({ base, properties: props, evaluateModes: (s) => [powerLaw(s)], seed: 3 });
     expect(fit.maxRelativeError).toBeLessThan(1e-10);
     expect(fit.onsetDisagreements).toBe(0);
     const sample = { ...base, viscosity: 5.3e-3, dSigmaDT: -0.93e-4 };
@@ -48,20 +48,36 @@ describe('fitMarginSurrogate', () => {
   it('gives the same spread as the full model for a power-law margin', () => {
     const common = { base, properties: props, samples: 5000, seed: 8 };
     const full = runPropertySpread({ ...common, evaluate: powerLaw });
-    const fit = fitMarginSurrogate({ base, properties: props, evaluate: powerLaw, seed: 8 });
+    const fit = fitMarginSurrogate({ base, properties: props, evaluateModes: (s) => [powerLaw(s)], seed: 8 });
     const fast = runPropertySpread({ ...common, evaluate: fit.evaluate });
     expect(fast.onsetProbability).toBe(full.onsetProbability);
     expect(fast.marginPercentiles.p50).toBeCloseTo(full.marginPercentiles.p50, 9);
   });
 
-  it('reports a large validation error where the margin has a kink (switch between two modes)', () => {
-    const kinked = (s: Readonly<Record<string, number>>) => Math.min(s.viscosity / 5e-3, 1.0 + 0.0 * s.dSigmaDT);
-    const fit = fitMarginSurrogate({ base, properties: props, evaluate: kinked, seed: 4, validationPoints: 200 });
+  // Two smooth modes crossing inside the box: margin = min(μ/μ₀, 1.1·(k/k₀)^0.5).
+  const modeA = (s: Readonly<Record<string, number>>) => s.viscosity / 5e-3;
+  const modeB = (s: Readonly<Record<string, number>>) => 1.1 * Math.sqrt(s.conductivity / 0.15);
+
+  it('reports a large validation error when a kink between two modes is fitted as one surface', () => {
+    const fit = fitMarginSurrogate({
+      base, properties: props, seed: 4, validationPoints: 200,
+      evaluateModes: (s) => [Math.min(modeA(s), modeB(s))],
+    });
     expect(fit.maxRelativeError).toBeGreaterThan(0.01);
   });
 
+  it('is exact again when each mode is fitted on its own and the smallest is taken', () => {
+    const fit = fitMarginSurrogate({
+      base, properties: props, seed: 4, validationPoints: 200,
+      // Like the stability solver: mode B (long-wave) is always known; mode A only where it wins.
+      evaluateModes: (s) => [modeA(s) <= modeB(s) ? modeA(s) : Number.NaN, modeB(s)],
+    });
+    expect(fit.maxRelativeError).toBeLessThan(1e-9);
+    expect(fit.onsetDisagreements).toBe(0);
+  });
+
   it('rejects a margin that is not positive at a design point', () => {
-    expect(() => fitMarginSurrogate({ base, properties: props, evaluate: () => -1, seed: 1 })).toThrow(
+    expect(() => fitMarginSurrogate({ base, properties: props, evaluateModes: () => [-1], seed: 1 })).toThrow(
       /needs a positive finite margin/,
     );
   });
