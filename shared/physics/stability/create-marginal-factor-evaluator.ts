@@ -4,7 +4,7 @@ import type { CheckedProblem } from './validate-problem';
 
 /** Collocation order by wavenumber band: short waves have thin boundary layers and need more nodes. */
 const ORDER_BANDS: readonly (readonly [number, number])[] = [
-  [3.5, 12],
+  [4, 12],
   [6, 14],
   [9, 16],
   [14, 20],
@@ -17,7 +17,7 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
  * returned closure (nothing is kept between calls of this function).
  *
  * ## Method
- * Chooses the Chebyshev order from the wavenumber (12 nodes + 1 up to k = 3.5, rising to 36 for
+ * Chooses the Chebyshev order from the wavenumber (12 nodes + 1 up to k = 4, rising to 36 for
  * k > 22), which keeps λ(k) within about 1e-7 relative of the converged value for the neutral
  * curves of this solver (checked by raising the order), then calls marginalFactorAt.
  *

@@ -3,7 +3,7 @@ import { minimiseMarginalFactor, type MarginalMinimum } from './minimise-margina
 import type { CheckedProblem } from './validate-problem';
 
 /** Coarse scan: spans the cellular minima of all boundary sets here (k_c ≈ 2–3.5); the walk extends it. */
-const SCAN: readonly number[] = [0.5, 0.85, 1.45, 2.45, 4.2];
+const SCAN: readonly number[] = [0.85, 1.45, 2.45, 4];
 const SMALLEST_WAVENUMBER = 0.01;
 const LARGEST_WAVENUMBER = 60;
 
@@ -11,7 +11,7 @@ const LARGEST_WAVENUMBER = 60;
  * Minimum over the wavenumber of the marginal factor of one problem: λ* and k_c.
  *
  * ## Method
- * minimiseMarginalFactor on ln k with a coarse scan at k = 0.5, 0.85, 1.45, 2.45, 4.2, walking
+ * minimiseMarginalFactor on ln k with a coarse scan at k = 0.85, 1.45, 2.45, 4, walking
  * outwards to 0.01 ≤ k ≤ 60; below k = 0.01 the k → 0 limit (longWaveLimit, or the value supplied)
  * stands for the whole long-wave end. Short waves beyond k = 60 (cells narrower than d/10) are not
  * searched: no boundary set or drive ratio met in coating practice puts its minimum there.

@@ -91,28 +91,20 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
     for (let j = 0; j < n; j++) h[j] = scale * (d3[j] - 3 * k2 * d1[j]);
   }
 
-  // Thermal operator: S·Θ = R·W  ⇒  Θ = T·W.
+  // Thermal operator S·Θ = R·W (interior (D² − k²)Θ = −W; top Biot row with Bi·H; bottom row).
   const s = new Float64Array(n * n);
-  const r = new Float64Array(n * n);
   for (let i = 1; i < last; i++) {
     for (let j = 0; j < n; j++) s[i * n + j] = d2[i * n + j];
     s[i * n + i] -= k2;
-    r[i * n + i] = -1;
   }
-  if (problem.biot === Infinity) {
-    s[0] = 1;
-    for (let j = 0; j < n; j++) r[j] = h[j];
-  } else {
-    for (let j = 0; j < n; j++) {
-      s[j] = d1[j];
-      r[j] = problem.biot * h[j];
-    }
+  const conductingTop = problem.biot === Infinity;
+  if (conductingTop) s[0] = 1;
+  else {
+    for (let j = 0; j < n; j++) s[j] = d1[j];
     s[0] += problem.biot;
   }
   if (problem.insulatingBottom) for (let j = 0; j < n; j++) s[last * n + j] = d1[last * n + j];
   else s[last * n + last] = 1;
-  const t = solveLinearSystems(s, n, r, n);
-  if (t === null) return Infinity;
 
   // Mechanical operator A (row replacement for the four boundary conditions).
   const a = new Float64Array(n * n);
@@ -127,32 +119,31 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
   for (let j = 0; j < n; j++) a[(last - 1) * n + j] = bottomSecond[last * n + j];
   a[last * n + last] = 1; // W(0) = 0
 
-  // Non-zero rows of B.
+  // Non-zero rows I of B. K = B_I·A⁻¹·E_I is built as Y = A⁻¹E_I, Z = R·Y, Θ-part = S⁻¹Z.
   const rows: number[] = [];
   if (hasMarangoni) rows.push(1);
   if (hasBuoyancy) for (let i = 2; i < last - 1; i++) rows.push(i);
   const m = rows.length;
-  const c = new Float64Array(m * n);
-  for (let q = 0; q < m; q++) {
-    const i = rows[q];
-    if (i === 1) {
-      const f = -marangoni * k2;
-      for (let j = 0; j < n; j++) c[q * n + j] = f * (t[j] - h[j]);
-    } else {
-      const f = rayleigh * k2;
-      for (let j = 0; j < n; j++) c[q * n + j] = f * t[i * n + j];
-    }
-  }
   const e = new Float64Array(n * m);
   for (let q = 0; q < m; q++) e[rows[q] * m + q] = 1;
-  const x = solveLinearSystems(a, n, e, m);
-  if (x === null) return Infinity;
+  const y = solveLinearSystems(a, n, e, m);
+  if (y === null) return Infinity;
+  const hy = new Float64Array(m); // H of each column of Y
+  if (deformable) for (let j = 0; j < n; j++) for (let q = 0; q < m; q++) hy[q] += h[j] * y[j * m + q];
+  const z = new Float64Array(n * m);
+  for (let i = 1; i < last; i++) for (let q = 0; q < m; q++) z[i * m + q] = -y[i * m + q];
+  for (let q = 0; q < m; q++) z[q] = conductingTop ? hy[q] : problem.biot * hy[q];
+  const theta = solveLinearSystems(s, n, z, m);
+  if (theta === null) return Infinity;
   const kmat = new Float64Array(m * m);
   for (let p = 0; p < m; p++) {
-    for (let j = 0; j < n; j++) {
-      const cpj = c[p * n + j];
-      if (cpj === 0) continue;
-      for (let q = 0; q < m; q++) kmat[p * m + q] += cpj * x[j * m + q];
+    const i = rows[p];
+    if (i === 1) {
+      const f = -marangoni * k2;
+      for (let q = 0; q < m; q++) kmat[p * m + q] = f * (theta[q] - hy[q]);
+    } else {
+      const f = rayleigh * k2;
+      for (let q = 0; q < m; q++) kmat[p * m + q] = f * theta[i * m + q];
     }
   }
   const eig = matrixEigenvalues(kmat, m);
