@@ -47,7 +47,9 @@ export async function ensurePostgres(options: EnsurePostgresOptions = {}): Promi
   const adminUrl = `postgres://postgres@127.0.0.1:${port}/postgres`;
   const reused = { adminUrl, startedByUs: false, stop: async () => {} };
 
-  if ((await probeServer(adminUrl)) === 'ready') {
+  const state = await probeServer(adminUrl);
+  if (state !== 'absent') {
+    if (state === 'starting') await waitUntilReady(adminUrl);
     log(`PostgreSQL: reusing the server already running on 127.0.0.1:${port}`);
     return reused;
   }
