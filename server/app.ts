@@ -20,6 +20,7 @@ import { registerInvitationsRoutes } from './features/invitations/invitations.ro
 import { registerOutboxRoutes } from './features/outbox/outbox.routes';
 import { registerUsersRoutes } from './features/users/users.routes';
 import { registerFluidsRoutes } from './features/fluids/fluids.routes';
+import { registerLayerChecksRoutes } from './features/layer-checks/layer-checks.routes';
 
 /** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
 export const JSON_BODY_LIMIT = '1mb';
@@ -80,6 +81,7 @@ export function createApp(input: CreateAppDeps): Express {
   registerAuditRoutes(api);
   registerOutboxRoutes(api);
   registerFluidsRoutes(api);
+  registerLayerChecksRoutes(api);
   app.use(api.router);
   app.use('/api', apiNotFound);
 
