@@ -19,9 +19,10 @@ export default {
         paper: { DEFAULT: '#f7f8f6', raised: '#ffffff', sunk: '#eceeea' },
         slate: { line: '#d3d8dc' },
         brand: { DEFAULT: '#2d4f6c', dark: '#1f3a52', light: '#dbe6ef' },
-        quiet: { DEFAULT: '#0f766e', light: '#ccece8' },
-        close: { DEFAULT: '#b45309', light: '#fbe6c8' },
-        over: { DEFAULT: '#b3123c', light: '#f8d3dc' },
+        // dark: text on the light tint (badges), ≥ 5.8:1 contrast, WCAG 2.1 SC 1.4.3 AA.
+        quiet: { DEFAULT: '#0f766e', light: '#ccece8', dark: '#0b5f58' },
+        close: { DEFAULT: '#b45309', light: '#fbe6c8', dark: '#8f4207' },
+        over: { DEFAULT: '#b3123c', light: '#f8d3dc', dark: '#9a1034' },
       },
     },
   },

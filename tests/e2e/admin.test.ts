@@ -8,6 +8,7 @@
  */
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { wcagViolations } from './support/accessibility';
 import { launchBrowser, navigationLabels, newPage, screenshot, signIn } from './support/browser';
 import { startTestApp, type TestApp } from './support/app-server';
 
@@ -47,6 +48,7 @@ describe('administrator pages', () => {
     const engineerRole = page.getByRole('combobox', { name: /Role of Priya Natarajan/ });
     expect(await engineerRole.inputValue()).toBe('engineer');
     await screenshot(page, 'administrator-users');
+    expect(await wcagViolations(page)).toEqual([]);
   }, E2E_TIMEOUT);
 
   it('shows a malformed e-mail beside the E-mail field without sending anything', async () => {
@@ -119,6 +121,7 @@ describe('administrator pages', () => {
     expect(match, body).not.toBeNull();
     invitationLink = match![0];
     await screenshot(page, 'administrator-outbox');
+    expect(await wcagViolations(page)).toEqual([]);
   }, E2E_TIMEOUT);
 
   it('lets the invited person set a password (≥ 12 characters) and sign in as their role', async () => {
@@ -168,6 +171,8 @@ describe('administrator pages', () => {
     await page.getByRole('heading', { name: 'Before' }).waitFor();
     await page.getByRole('heading', { name: 'After' }).waitFor();
     await screenshot(page, 'administrator-audit');
+
+    expect(await wcagViolations(page)).toEqual([]);
 
     await filters.getByLabel('Actor e-mail contains').fill('nobody-by-this-name');
     await filters.getByRole('button', { name: 'Apply' }).click();

@@ -6,6 +6,7 @@
  */
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { wcagViolations } from './support/accessibility';
 import { launchBrowser, navigationLabels, newPage, screenshot, signIn, signOut } from './support/browser';
 import { startTestApp, type TestApp } from './support/app-server';
 
@@ -40,6 +41,12 @@ describe('signing in as each demo role', () => {
         await page.goto('/');
         await page.waitForURL(/\/sign-in/);
 
+        if (demo.role === 'administrator') {
+          await page.getByTestId('demo-sign-in-administrator').waitFor();
+          await screenshot(page, 'sign-in');
+          expect(await wcagViolations(page)).toEqual([]);
+        }
+
         // Act: the demo sign-in for this role fills the form; the person presses Sign in.
         await page.getByTestId(`demo-sign-in-${demo.role}`).click();
         await expect.poll(() => page.getByLabel('E-mail').inputValue()).toBe(demo.email);
@@ -51,6 +58,7 @@ describe('signing in as each demo role', () => {
         expect(await page.getByTestId('home-role').innerText()).toBe(demo.label);
         expect(await page.getByTestId('user-menu-role').innerText()).toBe(demo.label);
         await screenshot(page, `${demo.role}-home`);
+        expect(await wcagViolations(page)).toEqual([]);
 
         await signOut(page);
         await page.goto('/');
@@ -69,6 +77,7 @@ describe('signing in as each demo role', () => {
       await page.getByRole('heading', { name: /Not permitted for your role/ }).waitFor();
       expect(await page.getByText('Line technician role').count()).toBe(1);
       expect(await page.getByRole('table').count()).toBe(0);
+      await screenshot(page, 'technician-not-permitted');
     } finally {
       await context.close();
     }

@@ -3,9 +3,9 @@ import { cn } from '../../utils/cn';
 export type StatusTone = 'quiet' | 'close' | 'over' | 'neutral';
 
 const tones: Record<StatusTone, string> = {
-  quiet: 'bg-quiet-light text-quiet border-quiet/40',
-  close: 'bg-close-light text-close border-close/40',
-  over: 'bg-over-light text-over border-over/40',
+  quiet: 'bg-quiet-light text-quiet-dark border-quiet/40',
+  close: 'bg-close-light text-close-dark border-close/40',
+  over: 'bg-over-light text-over-dark border-over/40',
   neutral: 'bg-paper-sunk text-ink-soft border-slate-line',
 };
 
