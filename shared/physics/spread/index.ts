@@ -1,0 +1,20 @@
+/** Property spread: seeded Monte Carlo over property uncertainties, chunkable for a job queue. */
+export { createLayerSpreadEvaluator, type LayerSpreadEvaluator } from './create-layer-spread-evaluator';
+export { createLayerSpreadPlan, type LayerSpreadOptions } from './create-layer-spread-plan';
+export { createSpreadPlan } from './create-spread-plan';
+export { fitMarginSurrogate, type MarginSurrogate } from './fit-margin-surrogate';
+export { histogramPercentile } from './histogram-percentile';
+export { LAYER_SPREAD_FIELDS, layerMarginEvaluator, type LayerSpreadField } from './layer-margin-evaluator';
+export { marginHistogramBin } from './margin-histogram-bin';
+export { marginSwingPerProperty } from './margin-swing-per-property';
+export { mergeSpreadChunks } from './merge-spread-chunks';
+export { percentileType7 } from './percentile-type7';
+export { runPropertySpread } from './run-property-spread';
+export { runSpreadChunk } from './run-spread-chunk';
+export { samplePropertyFactor } from './sample-property-factor';
+export { solveLeastSquares } from './solve-least-squares';
+export { spearmanRankCorrelation } from './spearman-rank-correlation';
+export { spreadLayerMargin } from './spread-layer-margin';
+export type * from './spread-types';
+export { summarizeSpread } from './summarize-spread';
+export { wilsonScoreInterval } from './wilson-score-interval';
