@@ -262,3 +262,39 @@ describe('computeDryingPath: bad input', () => {
     expect(() => computeDryingPath(fixedRateInput({ gridPoints: 1 }))).toThrow(/gridPoints/);
   });
 });
+
+describe('computeDryingPath: margins wired to the stability solver', () => {
+  it('a 3 mm cast layer on a held plate: Ra and Ma_T by hand, margin equal to a direct onsetMargin call', async () => {
+    const { onsetMargin } = await import('../stability');
+    // Thick layer, heat drawn up through it by evaporation (held plate, air at plate temperature).
+    const input = fixedRateInput({ wetThickness: 3e-3, gridPoints: 3, oven: { transport: { kind: 'schedule' }, zones: [{ duration: 5, airTemperature: 330, heatTransferCoefficient: 10 }] } });
+    const r = computeDryingPath(input);
+    const s = r.series;
+    const i = 0;
+    const h = s.thickness[i];
+    const mu = s.viscosity[i];
+    const kappa = 0.15 / (1000 * 2000);
+    // Chandrasekhar (1961) Ra = gβΔT h³/(νκ); Pearson (1958) Ma = −(dσ/dT)ΔT h/(μκ); Bi = h_air·h/k.
+    const ra = (9.80665 * 1e-3 * s.deltaT[i] * h ** 3) / ((mu / 1000) * kappa);
+    const ma = (1e-4 * s.deltaT[i] * h) / (mu * kappa);
+    expect(rel(s.rayleigh[i], ra)).toBeLessThan(1e-12);
+    expect(rel(s.thermalMarangoni[i], ma)).toBeLessThan(1e-12);
+    expect(rel(s.thermalBiot[i], (10 * h) / 0.15)).toBeLessThan(1e-12);
+    // Buoyancy is not negligible here (Ra/669 vs Ma/Ma_c), so the path must use the coupled solve.
+    expect(ra / 669 / (ma / 80)).toBeGreaterThan(1e-3);
+    const direct = onsetMargin({ bottom: 'rigid', bottomThermal: 'conducting', top: 'surface', biot: s.thermalBiot[i], rayleigh: ra, marangoni: ma });
+    expect(rel(s.thermalMargin[i], direct.margin)).toBeLessThan(1e-9);
+  });
+
+  it('a deformable surface can only lower the margins of a flat one (extra long-wave mode)', () => {
+    const flat = demoLine2DryingInput();
+    flat.gridPoints = 9;
+    const deformable = demoLine2DryingInput();
+    deformable.gridPoints = 9;
+    deformable.surface = 'deformable';
+    const a = computeDryingPath(flat).series;
+    const b = computeDryingPath(deformable).series;
+    b.solutalMargin.forEach((m, i) => expect(m).toBeLessThanOrEqual(a.solutalMargin[i] * (1 + 5e-3)));
+    b.thermalMargin.forEach((m, i) => expect(m).toBeLessThanOrEqual(a.thermalMargin[i] * (1 + 5e-3)));
+  });
+});

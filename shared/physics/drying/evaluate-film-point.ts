@@ -8,8 +8,12 @@ import { filmViscosity } from './film-viscosity';
 import type { FilmPoint, MarginTables } from './film-point';
 import type { PreparedDryingPath, PreparedZone } from './prepared-drying-path';
 
-/** Below this dynamic Bond number Ra/Ma the thermal margin is read from the pure-Marangoni table. */
-const NEGLIGIBLE_DYNAMIC_BOND = 1e-3;
+/**
+ * Buoyancy counts as negligible when (Ra/Ra_c)/(Ma/Ma_c) is below this share; the smallest Ra_c of a
+ * rigid conducting bottom under a free top (669.00, Nield 1964, insulating top) keeps it conservative.
+ */
+const NEGLIGIBLE_BUOYANCY_SHARE = 1e-3;
+const SMALLEST_RAYLEIGH_CRITICAL = 669.0;
 
 interface Margin {
   margin: number;
@@ -38,8 +42,9 @@ function fromTable(marangoni: number, critical: number): Margin {
  * is half this, so Δc is the surface-gradient scale, an upper bound).
  * Groups: Ra = gβΔT h³/(νκ), Ma_T = −(dσ/dT)ΔT h/(μκ), Ma_c = −(dσ/dψ)Δc h/(μD), Bi = h_top·h/k,
  * and the mass Biot number L = G h/(ρ_s D).
- * Thermal margin: rigid conducting bottom, free surface with Biot top. When Ra/Ma < 10⁻³ buoyancy is
- * negligible (by Nield's near-linear coupling Ra/Ra_c + Ma/Ma_c ≈ 1 it moves the margin by < 0.2 %)
+ * Thermal margin: rigid conducting bottom, free surface with Biot top. When buoyancy's share
+ * (Ra/669)/(Ma_T/Ma_c(Bi)) is below 10⁻³ (669 = the smallest Ra_c for this bottom, so the share is
+ * overstated), Nield's near-linear coupling Ra/Ra_c + Ma/Ma_c ≈ 1 says it moves the margin by < 0.1 %,
  * and margin = Ma_c(Bi)/Ma_T from the tabulated critical value; otherwise onsetMargin solves the
  * coupled problem. Solutal margin, by analogy (D for κ, L for Bi, no buoyancy from solvent content):
  * rigid bottom that is impermeable ('insulating'), free surface with Biot number L,
@@ -144,12 +149,14 @@ export function evaluateFilmPoint(
         solutal = { margin: r.margin, regime: r.regime };
       }
     } else {
-      const buoyancyMatters = rayleigh > 0 && !(thermalMarangoni > 0 && rayleigh / thermalMarangoni < NEGLIGIBLE_DYNAMIC_BOND);
-      if (buoyancyMatters) {
+      const criticalMa = tables.thermal(thermalBiot);
+      const buoyancyShare =
+        thermalMarangoni > 0 ? (rayleigh / SMALLEST_RAYLEIGH_CRITICAL) / (thermalMarangoni / criticalMa) : Number.POSITIVE_INFINITY;
+      if (rayleigh > 0 && !(buoyancyShare < NEGLIGIBLE_BUOYANCY_SHARE)) {
         const r = onsetMargin({ bottom: 'rigid', bottomThermal: 'conducting', top: 'surface', biot: thermalBiot, rayleigh, marangoni: thermalMarangoni });
         thermal = { margin: r.margin, regime: r.regime };
       } else {
-        thermal = fromTable(thermalMarangoni, tables.thermal(thermalBiot));
+        thermal = fromTable(thermalMarangoni, criticalMa);
       }
       solutal = fromTable(solutalMarangoni, tables.solutal(massBiot));
     }
