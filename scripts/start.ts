@@ -40,7 +40,11 @@ runMain(async () => {
     });
     process.env.SMTP_FAKE_PORT = String(fake.port);
     onShutdown('mail fake', () => fake.close());
-    console.log(`Mail: local fake on 127.0.0.1:${fake.port} (messages appear under Outbox)`);
+    console.log(
+      mode === 'demo'
+        ? `Mail: local fake on 127.0.0.1:${fake.port} (messages appear under Outbox)`
+        : `Mail: SMTP_URL is not set, so messages go to the local fake on 127.0.0.1:${fake.port}; set SMTP_URL to reach people`,
+    );
   } else {
     console.log('Mail: sending through SMTP_URL');
   }

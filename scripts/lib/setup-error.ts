@@ -1,3 +1,5 @@
+import { shutdown } from './shutdown';
+
 /**
  * A set-up step that cannot continue for a reason the person at the keyboard can fix
  * (missing rights, a busy port, …). Scripts print only the message, no stack trace.
@@ -9,11 +11,18 @@ export class SetupError extends Error {
   }
 }
 
-/** Runs a script's main function; prints set-up errors plainly and exits non-zero on any failure. */
+/** Errors whose message is written for people (ours, and server/env.ts's EnvError). */
+function isForPeople(error: unknown): error is Error {
+  return error instanceof Error && (error.name === 'SetupError' || error.name === 'EnvError');
+}
+
+/**
+ * Runs a script's main function. On failure prints the error (plainly when it is meant for
+ * people), runs the clean-ups registered so far (e.g. stops the PostgreSQL it started) and exits 1.
+ */
 export function runMain(main: () => Promise<void>): void {
   main().catch((error: unknown) => {
-    if (error instanceof SetupError) console.error(`\n${error.message}`);
-    else console.error(error);
-    process.exit(1);
+    console.error(isForPeople(error) ? `\n${error.message}` : error);
+    void shutdown(1);
   });
 }
