@@ -112,6 +112,33 @@ describe('signing in as each demo role', () => {
     }
   }, E2E_TIMEOUT);
 
+  it('is usable from the keyboard: skip link first, then the menu opens and closes with the keyboard', async () => {
+    const { context, page } = await newPage(browser, app.url);
+    try {
+      await signIn(page, 'reviewer@larkspur.example');
+      await page.locator('body').focus();
+      await page.keyboard.press('Tab');
+      const skip = page.getByRole('link', { name: 'Skip to main content' });
+      expect(await skip.evaluate((element) => element === document.activeElement)).toBe(true);
+      expect(await skip.isVisible()).toBe(true);
+      const box = await skip.boundingBox();
+      expect(box && box.width > 20 && box.height > 20).toBe(true);
+      await screenshot(page, 'keyboard-skip-link');
+      await page.keyboard.press('Enter');
+      expect(await page.evaluate(() => document.activeElement?.id)).toBe('main');
+
+      const toggle = page.getByTestId('user-menu-toggle');
+      await toggle.focus();
+      await page.keyboard.press('Enter');
+      await page.getByRole('button', { name: 'Sign out' }).waitFor();
+      await page.keyboard.press('Escape');
+      await page.getByRole('button', { name: 'Sign out' }).waitFor({ state: 'hidden' });
+      expect(await toggle.evaluate((element) => element === document.activeElement)).toBe(true);
+    } finally {
+      await context.close();
+    }
+  }, E2E_TIMEOUT);
+
   it('an unknown address shows the not-found page', async () => {
     const { context, page } = await newPage(browser, app.url);
     try {

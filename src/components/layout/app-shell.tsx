@@ -20,7 +20,7 @@ export function AppShell({ navItems, userMenu, children }: AppShellProps) {
     <div className="flex min-h-screen flex-col">
       <a
         href="#main"
-        className="no-print sr-only z-50 rounded-md bg-brand px-4 py-2 font-semibold text-white focus:not-sr-only focus:fixed focus:top-2 focus:left-2"
+        className="no-print sr-only z-50 rounded-md bg-brand px-4 py-2 font-semibold text-white focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:px-4 focus:py-2 focus:shadow-lg"
       >
         Skip to main content
       </a>
