@@ -224,6 +224,40 @@ describe('computeDryingPath: properties (fast-check)', () => {
     );
   });
 
+  it('stays finite and conserves solids for random valid lines (2 µm–2 mm wet, 1–5 zones, held or thermal-mass web)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2e-6, max: 2e-3, noNaN: true }),
+        fc.double({ min: 0.02, max: 0.6, noNaN: true }),
+        fc.array(
+          fc.record({ T: fc.double({ min: 290, max: 480, noNaN: true }), h: fc.double({ min: 0, max: 400, noNaN: true }), L: fc.double({ min: 0.2, max: 30, noNaN: true }) }),
+          { minLength: 1, maxLength: 5 },
+        ),
+        fc.double({ min: 0.05, max: 10, noNaN: true }),
+        fc.boolean(),
+        fc.double({ min: 1e-13, max: 1e-8, noNaN: true }),
+        (h0, phi, zones, speed, held, diffusivity) => {
+          const input = demoLine2DryingInput();
+          input.wetThickness = h0;
+          input.solidsFraction = phi;
+          input.gridPoints = 21;
+          input.solvent.diffusivity = diffusivity;
+          input.oven = {
+            transport: { kind: 'line', lineSpeed: speed, webWidth: 1 },
+            zones: zones.map((z) => ({ length: z.L, airTemperature: z.T, heatTransferCoefficient: z.h })),
+          };
+          if (held) input.substrate = { kind: 'held', temperature: 320 };
+          const r = computeDryingPath(input);
+          expect(r.massBalance.relativeError).toBeLessThan(1e-6);
+          for (const values of Object.values(r.series)) {
+            if (values !== null) for (const x of values) if (typeof x === 'number') expect(Number.isNaN(x)).toBe(false);
+          }
+        },
+      ),
+      { numRuns: 25 },
+    );
+  });
+
   it('margins recover as viscosity rises', () => {
     fc.assert(
       fc.property(fc.double({ min: 1.05, max: 100, noNaN: true }), (k) => {
