@@ -155,7 +155,7 @@ export interface DryingPathInput {
   rtol?: number;
 }
 
-/** Time series on the plotting grid (all arrays the same length). Infinity = no onset possible. */
+/** Time series on the plotting grid (all arrays the same length). A margin of Infinity means no stationary onset is possible (JSON.stringify writes it as null). */
 export interface DryingSeries {
   /** [s] */
   time: number[];
