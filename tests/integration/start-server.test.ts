@@ -1,4 +1,5 @@
 import { spawn } from 'node:child_process';
+import http from 'node:http';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer } from '../../server/index';
@@ -25,10 +26,27 @@ describe('startServer', () => {
     expect(health.status).toBe(200);
     expect(await health.json()).toEqual({ status: 'ok', database: 'up' });
 
-    const inFlight = fetch(`${started.url}/api/users`); // answered (401) while closing
-    await new Promise((resolve) => setTimeout(resolve, 20));
-    await started.close();
-    expect((await inFlight).status).toBe(401);
+    // A request whose body is still arriving when close() is called must still be answered.
+    const body = JSON.stringify({ email: 'nobody-in-flight@larkspur.example', password: 'not-a-real-password' });
+    const { port } = new URL(started.url);
+    let inFlightRequest: http.ClientRequest | undefined;
+    const inFlight = new Promise<number>((resolve, reject) => {
+      const req = http.request(
+        { host: '127.0.0.1', port, method: 'POST', path: '/api/auth/sign-in', headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } },
+        (res) => {
+          res.resume();
+          res.on('end', () => resolve(res.statusCode ?? 0));
+        },
+      );
+      req.on('error', reject);
+      req.write(body.slice(0, 10));
+      inFlightRequest = req;
+    });
+    await new Promise((resolve) => setTimeout(resolve, 300)); // the server (same process) takes the connection meanwhile
+    const closed = started.close();
+    inFlightRequest!.end(body.slice(10));
+    expect(await inFlight).toBe(401);
+    await closed;
     await expect(fetch(`${started.url}/api/health`)).rejects.toThrow();
   });
 });
@@ -46,7 +64,7 @@ describe('tsx server/index.ts', () => {
     expect(code).toBe(1);
     expect(stderr).toMatch(/SESSION_SECRET/);
     expect(stderr).toMatch(/production/);
-  });
+  }, 120_000);
 
   it('starts, then shuts down cleanly on SIGTERM', async () => {
     const root = path.resolve(import.meta.dirname, '..', '..');
@@ -69,5 +87,5 @@ describe('tsx server/index.ts', () => {
     child.kill('SIGTERM');
     expect(await exited).toBe(0);
     expect(stdout).toMatch(/QuietLayer stopped/);
-  });
+  }, 120_000);
 });
