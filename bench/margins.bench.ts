@@ -1,0 +1,101 @@
+/**
+ * Margins benchmark (standalone; run by `npm run bench` or `npm run bench -- margins`).
+ * Prints medians against the design targets:
+ * - 10,000 Onset margins of physical layers with varied properties (deformable surface included) ≤ 3 s;
+ * - a 200-depth Quiet window (adaptive sampling, default tolerance 1e-3) ≤ 100 ms;
+ * and, for information, the same window with every depth solved and one full evaluateLayer
+ * (groups, onset, both depth searches). Exits 0 either way; a miss is printed as MISSED with the factor.
+ */
+import { cpus, loadavg } from 'node:os';
+import { evaluateLayer } from '../shared/physics/sizing/evaluate-layer';
+import { layerGroups } from '../shared/physics/sizing/layer-groups';
+import { layerStabilityProblem } from '../shared/physics/sizing/layer-stability-problem';
+import { quietWindow } from '../shared/physics/sizing/quiet-window';
+import type { PhysicalLayer } from '../shared/physics/sizing/types';
+import { onsetMargin } from '../shared/physics/stability/onset-margin';
+
+function median(samples: number[]): number {
+  const sorted = [...samples].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+function time<T>(runs: number, work: () => T): { ms: number; samples: number[]; last: T } {
+  const samples: number[] = [];
+  let last = work();
+  for (let i = 0; i < runs; i += 1) {
+    const start = performance.now();
+    last = work();
+    samples.push(performance.now() - start);
+  }
+  return { ms: median(samples), samples, last };
+}
+
+function report(label: string, ms: number, target: number | null, note = ''): void {
+  const verdict = target === null ? '' : ms <= target ? 'ok' : `MISSED by ×${(ms / target).toFixed(2)}`;
+  const goal = target === null ? '(no target)'.padEnd(18) : `target ≤ ${target} ms`.padEnd(18);
+  console.log(`${label.padEnd(58)} median ${ms.toFixed(1).padStart(9)} ms   ${goal} ${verdict} ${note}`);
+}
+
+/** Seeded generator (mulberry32) so every run times the same layers. */
+function seeded(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
+  };
+}
+
+const solventFilm: PhysicalLayer = {
+  bottom: 'rigid', bottomThermal: 'conducting', top: 'surface',
+  density: 900, viscosity: 0.01, conductivity: 0.15, heatCapacity: 1900, expansion: 1e-3,
+  surfaceTension: 0.025, dSigmaDT: -1e-4, depth: 5e-4, deltaT: 5, heatTransfer: 30, gravity: 9.80665,
+};
+
+function variedLayers(count: number): PhysicalLayer[] {
+  const random = seeded(20_260_101);
+  const spread = (value: number) => value * (0.7 + 0.6 * random());
+  return Array.from({ length: count }, () => ({
+    ...solventFilm,
+    density: spread(solventFilm.density),
+    viscosity: spread(solventFilm.viscosity),
+    conductivity: spread(solventFilm.conductivity),
+    heatCapacity: spread(solventFilm.heatCapacity),
+    expansion: spread(solventFilm.expansion),
+    surfaceTension: spread(solventFilm.surfaceTension),
+    dSigmaDT: spread(solventFilm.dSigmaDT),
+    depth: 2e-5 * 250 ** random(),
+    deltaT: 1 + 19 * random(),
+    heatTransfer: 100 * random(),
+  }));
+}
+
+console.log(`machine: ${cpus().length} cores, load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}`);
+
+const layers = variedLayers(10_000);
+const margins = time(3, () => {
+  let quiet = 0;
+  for (const layer of layers) {
+    const margin = onsetMargin(layerStabilityProblem(layer, layerGroups(layer), { deformable: true })).margin;
+    if (margin >= 1) quiet += 1;
+  }
+  return quiet;
+});
+report('10,000 Onset margins, varied properties (deformable)', margins.ms, 3000, `(${margins.last} quiet)`);
+
+const windowOptions = { depthMin: 1e-5, depthMax: 1e-2, deltaTMin: 0, deltaTMax: 30, depthPoints: 200, deltaTPoints: 60 };
+const adaptive = time(5, () => quietWindow(solventFilm, windowOptions));
+report('Quiet window, 200 depths × 60 ΔT (adaptive, tol 1e-3)', adaptive.ms, 100, `(${adaptive.last.solvedDepths} depths solved)`);
+const exact = time(1, () => quietWindow(solventFilm, { ...windowOptions, tolerance: 0 }));
+report('Quiet window, 200 depths, every depth solved', exact.ms, null);
+let worst = 0;
+adaptive.last.onsetDeltaT.forEach((value, i) => {
+  const reference = exact.last.onsetDeltaT[i];
+  if (value !== null && reference !== null) worst = Math.max(worst, Math.abs(value / reference - 1));
+});
+console.log(`  adaptive vs every-depth onset ΔT: largest relative difference ${worst.toExponential(2)}`);
+const evaluation = time(5, () => evaluateLayer(solventFilm));
+report('evaluateLayer (groups, onset, both depth searches)', evaluation.ms, null);
