@@ -131,12 +131,12 @@ describe('administrator pages', () => {
       await page.goto(invitationLink);
       await page.getByText(INVITEE.name).waitFor();
       await page.getByText(INVITEE.role, { exact: true }).waitFor();
-      await page.getByLabel('New password').fill('short-pass1');
+      await page.getByLabel('New password', { exact: true }).fill('short-pass1');
       await page.getByLabel('Repeat the password').fill('short-pass1');
       await page.getByRole('button', { name: 'Set password and sign in' }).click();
       await page.getByText('password must be at least 12 characters').waitFor();
 
-      await page.getByLabel('New password').fill('casting drum at 80 degrees');
+      await page.getByLabel('New password', { exact: true }).fill('casting drum at 80 degrees');
       await page.getByLabel('Repeat the password').fill('casting drum at 80 degrees');
       await page.getByRole('button', { name: 'Set password and sign in' }).click();
       await page.getByRole('navigation', { name: 'Main' }).waitFor();
@@ -144,6 +144,59 @@ describe('administrator pages', () => {
       expect(await page.getByTestId('home-role').innerText()).toBe(INVITEE.role);
     } finally {
       await context.close();
+    }
+  }, E2E_TIMEOUT);
+
+  it('resets a forgotten password through the e-mailed link, once', async () => {
+    const person = await newPage(browser, app.url);
+    try {
+      // The person asks for a link; the answer never says whether the address exists.
+      await person.page.goto('/sign-in');
+      await person.page.getByRole('link', { name: 'Forgot your password?' }).click();
+      await person.page.getByLabel('E-mail').fill('engineer@larkspur.example');
+      await person.page.getByRole('button', { name: 'Send reset link' }).click();
+      await person.page.getByText('Check your mail').waitFor();
+
+      // The administrator finds the mail in the outbox.
+      const { page } = admin;
+      await page.goto('/admin/outbox');
+      const row = page.getByRole('row').filter({ hasText: 'Set a new QuietLayer password' });
+      await expect
+        .poll(
+          async () => {
+            await page.getByRole('button', { name: 'Refresh' }).click();
+            return (await row.count()) === 1 && /Sent[\s\S]*Yes/.test(await row.innerText());
+          },
+          { timeout: 30_000, interval: 1_000 },
+        )
+        .toBe(true);
+      await row.getByRole('button', { name: /Show text/ }).click();
+      const body = await page.locator('pre').filter({ hasText: 'reset-password' }).innerText();
+      const link = body.match(/https?:\/\/\S+\/reset-password\?token=\S+/)?.[0];
+      expect(link, body).toBeDefined();
+
+      // A mismatch is caught beside the second field; then the new password is set.
+      await person.page.goto(link!);
+      await person.page.getByLabel('New password', { exact: true }).fill('oven zone three at 140 C');
+      await person.page.getByLabel('Repeat the password').fill('oven zone three at 141 C');
+      await person.page.getByRole('button', { name: 'Set new password' }).click();
+      await person.page.getByText('The two passwords are not the same').waitFor();
+      await person.page.getByLabel('Repeat the password').fill('oven zone three at 140 C');
+      await person.page.getByRole('button', { name: 'Set new password' }).click();
+      await person.page.getByText('Password changed').waitFor();
+
+      // The same link does not work twice.
+      await person.page.goto(link!);
+      await person.page.getByLabel('New password', { exact: true }).fill('a different sentence here');
+      await person.page.getByLabel('Repeat the password').fill('a different sentence here');
+      await person.page.getByRole('button', { name: 'Set new password' }).click();
+      await person.page.getByText('This reset link no longer works').waitFor();
+
+      await person.page.goto('/sign-in');
+      await signIn(person.page, 'engineer@larkspur.example', 'oven zone three at 140 C');
+      expect(await person.page.getByTestId('home-role').innerText()).toBe('Process engineer');
+    } finally {
+      await person.context.close();
     }
   }, E2E_TIMEOUT);
 
