@@ -85,6 +85,18 @@ async function fluidForCheck(db: DbOrTx, fluidId: string) {
   return fluid;
 }
 
+/** One stored form of an input: optional parts explicit (null), as JSON would store them. */
+function normalizeInput(input: LayerCheckInputParsed): LayerCheckInputParsed {
+  return JSON.parse(
+    JSON.stringify({
+      ...input,
+      lateral: input.lateral ?? null,
+      panelWidth: input.panelWidth ?? null,
+      soluteFractionDifference: input.soluteFractionDifference ?? null,
+    }),
+  ) as LayerCheckInputParsed;
+}
+
 /** The columns a check's input fills (evaluated for the saved margin and regime). */
 function checkColumns(input: LayerCheckInputParsed, evaluation: LayerEvaluation) {
   return {
@@ -115,7 +127,8 @@ export async function getLayerCheck(db: DbOrTx, id: string): Promise<LayerCheck>
 }
 
 /** Creates a check (owner = the engineer), its revision 1, and an audit event. */
-export async function createLayerCheck(db: Database, user: CurrentUser, input: LayerCheckInputParsed, meta: RequestMeta = {}): Promise<LayerCheck> {
+export async function createLayerCheck(db: Database, user: CurrentUser, rawInput: LayerCheckInputParsed, meta: RequestMeta = {}): Promise<LayerCheck> {
+  const input = normalizeInput(rawInput);
   const fluid = await fluidForCheck(db, input.fluidId);
   if (fluid.archived) throw new UnprocessableError('This fluid is archived; pick an active fluid or restore it first.', { fluidId: 'the fluid is archived' });
   const evaluation = evaluateOrThrow(input, fluid.laws, fluid.archived);
@@ -146,14 +159,15 @@ export async function updateLayerCheck(
   body: z.output<typeof updateLayerCheckInputSchema>,
   meta: RequestMeta = {},
 ): Promise<LayerCheck> {
-  const { version, ...input } = body;
+  const { version, ...rawInput } = body;
+  const input = normalizeInput(rawInput);
   const fluid = await fluidForCheck(db, input.fluidId);
   const evaluation = evaluateOrThrow(input, fluid.laws, fluid.archived);
   await db.transaction(async (tx) => {
     const before = await findCheckById(tx, id, { forUpdate: true });
     if (!before) throw new NotFoundError('There is no layer check with this id.');
     if (before.check.version !== version) throw new StaleVersionError('layer check', version, toLayerCheck(before), before.check.version);
-    if (isDeepStrictEqual(before.check.input, input)) return;
+    if (isDeepStrictEqual(normalizeInput(before.check.input), input)) return;
     if (fluid.archived && before.check.fluidId !== input.fluidId) {
       throw new UnprocessableError('This fluid is archived; pick an active fluid or restore it first.', { fluidId: 'the fluid is archived' });
     }
