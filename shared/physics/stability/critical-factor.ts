@@ -24,6 +24,7 @@ const LARGEST_WAVENUMBER = 60;
  * @param problem - checked problem (see validateProblem)
  * @param evaluate - λ(k) for this problem (see createMarginalFactorEvaluator)
  * @param limitAtZero - λ as k → 0 if already known [-]
+ * @param scan - coarse-scan wavenumbers [1/d], increasing (default 0.85, 1.45, 2.45, 4)
  * @returns λ* [-] (Infinity if none) and k_c [1/d] (0 for the k → 0 end, NaN if λ* is infinite)
  * @example criticalFactor(p, createMarginalFactorEvaluator(p)) // rigid/rigid with Ra = 1: ≈ { factor: 1707.762, wavenumber: 3.117 }
  */
@@ -31,11 +32,12 @@ export function criticalFactor(
   problem: CheckedProblem,
   evaluate: (wavenumber: number) => number,
   limitAtZero?: number,
+  scan: readonly number[] = SCAN,
 ): MarginalMinimum {
   if (problem.rayleigh === 0 && problem.marangoni === 0) return Object.freeze({ factor: Infinity, wavenumber: NaN });
   const bond = problem.crispation > 0 ? problem.bond : 1;
   return minimiseMarginalFactor(evaluate, {
-    scan: SCAN,
+    scan,
     smallest: SMALLEST_WAVENUMBER,
     largest: LARGEST_WAVENUMBER,
     limitAtZero: () => limitAtZero ?? longWaveLimit(evaluate, bond),

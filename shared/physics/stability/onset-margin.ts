@@ -18,10 +18,10 @@ import { validateProblem } from './validate-problem';
  *    deformable problem → longWaveMargin (for Ra = 0 and a rigid conducting bottom it equals
  *    VanHook et al.'s Ma_LW = (2/3)Ga(1 + Bi); with buoyancy λ_LW = (2/3)Ga(1 + Bi)/(Ma +
  *    (11/60)Bi·Ra), derived in marginal-factor-at.ts), and the deformable problem minimised over
- *    k. The most dangerous mode is the lower of the two; it is long-wave when the k → 0 limit
- *    wins. With a flat surface the cellular result is the answer (its minimum may itself lie at
- *    k → 0, for example with two insulating walls, reported as wavenumber 0 but not as long-wave
- *    thinning, which needs a deforming surface).
+ *    k (scan started around the flat k_c). The most dangerous mode is the lower of the two; it is
+ *    long-wave when the k → 0 limit wins. With a flat surface the cellular result is the answer
+ *    (its minimum may itself lie at k → 0, for example with two insulating walls, reported as
+ *    wavenumber 0 but not as long-wave thinning, which needs a deforming surface).
  * 3. buoyancyShare at the onset mode (see buoyancyShare) and the regime (see classifyRegime).
  * λ* ≥ 1 means quiet; λ* scales as 1/ΔT at fixed Bi, Cr, Bo.
  *
@@ -55,7 +55,10 @@ export function onsetMargin(problem: StabilityProblem): OnsetResult {
   if (checked.crispation > 0) {
     const evaluate = createMarginalFactorEvaluator(checked);
     longWaveMargin = longWaveLimit(evaluate, checked.bond);
-    const deformable = criticalFactor(checked, evaluate, longWaveMargin);
+    // The cellular minimum of the deformable problem lies near the flat one: start the scan there
+    // (the walk still moves outwards if λ keeps falling).
+    const near = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? [cell.wavenumber / 1.25, cell.wavenumber, cell.wavenumber * 1.25] : undefined;
+    const deformable = criticalFactor(checked, evaluate, longWaveMargin, near);
     modeProblem = checked;
     if (longWaveMargin <= deformable.factor && Number.isFinite(longWaveMargin)) {
       margin = longWaveMargin;
