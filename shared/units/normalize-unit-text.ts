@@ -6,7 +6,7 @@ import type { QuantityKind } from './quantity-kinds';
  * ## Method
  * Micro signs (U+00B5, U+03BC) become `u`; `°C`, `℃`, `°F`, `℉` become `degC`/`degF`; the middle dot,
  * `⋅`, `×`, `*` and a dot between letters become a space (a product of units); superscripts ² ³ ⁻¹
- * become powers; `Btu` becomes the library's `BTU` (the International Table Btu, 1055.05585262 J)
+ * become powers, as does a bare trailing 2 or 3 (`cm3` → `cm^3`); `Btu` becomes the library's `BTU` (the International Table Btu, 1055.05585262 J)
  * and `hr` becomes `h`; a leading `1/X` becomes `X^-1` (the library cannot divide into a bare 1).
  * For temperatures only, a bare `C` or `F` means degrees (elsewhere `C` is the coulomb).
  *
@@ -34,6 +34,7 @@ export function normalizeUnitText(unitText: string, kind: QuantityKind): string 
     .replace(/⁻³/g, '^-3')
     .replace(/²/g, '^2')
     .replace(/³/g, '^3')
+    .replace(/([A-Za-z])([23])(?![\d.^])/g, '$1^$2')
     .replace(/\bBtu\b/gi, 'BTU')
     .replace(/\bhr\b/g, 'h')
     .replace(/\s+/g, ' ')

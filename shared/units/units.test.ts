@@ -79,6 +79,8 @@ describe('parseQuantity: heat, density, fluxes and speeds', () => {
     expect(parseQuantity('0.15 W/(m·K)', 'conductivity')).toBeCloseTo(0.15, 15);
     expect(parseQuantity('2.1 kJ/(kg·K)', 'heatCapacity')).toBeCloseTo(2100, 10);
     expect(parseQuantity('1.2 g/cm³', 'density')).toBeCloseTo(1200, 9);
+    expect(parseQuantity('1.2 g/cm3', 'density')).toBeCloseTo(1200, 9);
+    expect(parseQuantity('25 W/(m2·K)', 'heatTransferCoefficient')).toBeCloseTo(25, 12);
     expect(parseQuantity('2e-4 1/K', 'expansion')).toBeCloseTo(2e-4, 15);
     expect(parseQuantity('2e-4 /K', 'expansion')).toBeCloseTo(2e-4, 15);
     expect(parseQuantity('2e-4 K⁻¹', 'expansion')).toBeCloseTo(2e-4, 15);
