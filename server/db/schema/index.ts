@@ -3,3 +3,4 @@ export * from './audit';
 export * from './mail';
 export * from './fluids';
 export * from './layer-checks';
+export * from './beyond-onset';
