@@ -4,3 +4,4 @@ export * from './mail';
 export * from './fluids';
 export * from './layer-checks';
 export * from './beyond-onset';
+export * from './sheets';
