@@ -21,6 +21,7 @@ import { registerOutboxRoutes } from './features/outbox/outbox.routes';
 import { registerUsersRoutes } from './features/users/users.routes';
 import { registerFluidsRoutes } from './features/fluids/fluids.routes';
 import { registerLayerChecksRoutes } from './features/layer-checks/layer-checks.routes';
+import { registerBatchRoutes } from './features/batch/batch.routes';
 
 /** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
 export const JSON_BODY_LIMIT = '1mb';
@@ -82,6 +83,7 @@ export function createApp(input: CreateAppDeps): Express {
   registerOutboxRoutes(api);
   registerFluidsRoutes(api);
   registerLayerChecksRoutes(api);
+  registerBatchRoutes(api);
   app.use(api.router);
   app.use('/api', apiNotFound);
 
