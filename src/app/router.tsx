@@ -1,4 +1,5 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { PageLoading } from '../components/layout/page-loading';
 import { paths } from '../config/paths';
 import { AcceptInvitationRoute } from './routes/accept-invitation';
 import { AppRoot, appRootLoader } from './routes/app-root';
@@ -23,7 +24,7 @@ export const router = createBrowserRouter([
     element: <AppRoot />,
     loader: appRootLoader,
     errorElement: <RouteError />,
-    hydrateFallbackElement: <></>,
+    hydrateFallbackElement: <PageLoading />,
     children: [
       { index: true, element: <HomeRoute />, errorElement: <RouteError /> },
       { path: paths.adminUsers, lazy: () => import('./routes/admin/users') },

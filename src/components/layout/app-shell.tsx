@@ -4,6 +4,7 @@ import type { NavItem } from '../../config/navigation';
 import { paths } from '../../config/paths';
 import { cn } from '../../utils/cn';
 import { BrandName } from './brand-mark';
+import { NavigationProgress } from './navigation-progress';
 
 interface AppShellProps {
   navItems: NavItem[];
@@ -18,6 +19,7 @@ interface AppShellProps {
 export function AppShell({ navItems, userMenu, children }: AppShellProps) {
   return (
     <div className="flex min-h-screen flex-col">
+      <NavigationProgress />
       <a
         href="#main"
         className="no-print sr-only z-50 rounded-md bg-brand px-4 py-2 font-semibold text-white focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:px-4 focus:py-2 focus:shadow-lg"
