@@ -56,7 +56,7 @@ export function sampleDepthOnsets(
   };
   if (n <= 24 || exactOnly) return depths.map((_, i) => Object.freeze({ ...solveIndex(i), solved: true }));
 
-  const initial = 9;
+  const initial = 5;
   for (let k = 0; k < initial; k += 1) solveIndex(Math.round((k * (n - 1)) / (initial - 1)));
   const logDepths = depths.map(Math.log);
 
