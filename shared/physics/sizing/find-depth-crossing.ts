@@ -1,7 +1,7 @@
 import { findRootBrent } from './find-root-brent';
 import type { DepthBound } from './types';
 
-/** A margin that is infinite (no onset) is capped at e^LOG_CAP so that the root finder sees finite values. */
+/** Margins are clamped to e^±LOG_CAP (∞: no onset; 0: onset at any ΔT) so that the root finder sees finite values. */
 const LOG_CAP = 50;
 
 /** What {@link findDepthCrossing} needs to know. */
@@ -25,7 +25,7 @@ export interface DepthCrossingSearch {
  * Depth at which an onset margin crosses 1, searched outward from the layer's depth.
  *
  * ## Method
- * Work with g(d) = ln λ*(d) (capped at 50 for λ* = ∞), whose zero is the onset depth. From the start
+ * Work with g(d) = ln λ*(d) (clamped to ±50 for λ* = ∞ or 0), whose zero is the onset depth. From the start
  * depth, step geometrically toward the quiet side if the layer is in onset (g < 0), or toward the
  * onset side if it is quiet, until g changes sign; the step factor is (λ*)^(1/p)·1.05 clamped to
  * 1.25–10, which lands close to the root when λ* follows the expected power of depth. The bracket is
@@ -47,7 +47,8 @@ export function findDepthCrossing(search: DepthCrossingSearch): DepthBound {
   const g = (depth: number): number => {
     const m = search.margin(depth);
     if (Number.isNaN(m)) throw new RangeError(`margin is NaN at depth ${depth} m`);
-    return m === Infinity ? LOG_CAP : Math.min(LOG_CAP, Math.log(m));
+    // Clamp to ±LOG_CAP: λ* = ∞ (no onset) and λ* = 0 (onset at any ΔT, e.g. no gravity on a deformable film).
+    return Math.max(-LOG_CAP, Math.min(LOG_CAP, Math.log(m)));
   };
   const towardOnset = quietSide === 'below' ? 1 : -1; // +1: onset lies at larger depth
   // Work in x = ln d throughout so that the bracket ends are evaluated exactly as Brent's method sees them.

@@ -81,3 +81,10 @@ describe('sampleDepthOnsets: adaptive sampling against direct evaluation', () =>
     depths.forEach((d, i) => (d < 2e-3 ? expect(sampled[i].margin).toBeCloseTo(2, 12) : expect(sampled[i].margin).toBe(Infinity)));
   });
 });
+
+describe('findDepthCrossing with zero margins', () => {
+  it('treats a zero margin (onset at any ΔT) as onset, not as an error (found by property test)', () => {
+    const r = findDepthCrossing({ minDepth: 1e-7, maxDepth: 10, modeName: 'thinning', margin: (d) => (d < 1e-4 ? 0 : 2), startDepth: 1e-6, quietSide: 'above', stepPower: 2 });
+    expect(r.found && Math.abs(r.depth / 1e-4 - 1)).toBeLessThan(1e-5);
+  });
+});

@@ -13,7 +13,8 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  * move together) and the flat cellular margin λ*_cell(d) is taken from the onset solver; the depth
  * where λ*_cell = 1 is bracketed outward from the layer's own depth and refined by Brent's method
  * ({@link findDepthCrossing}). For pure buoyancy this is d = (Ra_c νκ/(gβΔT))^(1/3); for pure
- * thermocapillarity with Bi = 0, d = Ma_c μκ/(|dσ/dT|ΔT).
+ * thermocapillarity with Bi = 0, d = Ma_c μκ/(|dσ/dT|ΔT). With ΔT = 0 (or a stabilising ΔT) there is
+ * no onset at any depth and the answer is 'quiet-throughout-range'.
  *
  * ## References
  * - Chandrasekhar S. (1961) "Hydrodynamic and Hydromagnetic Stability", Oxford, ch. II.
@@ -28,10 +29,9 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  */
 export function maxStableDepth(layer: PhysicalLayer, options: DepthSearchOptions = {}): DepthBound {
   const checked = validatePhysicalLayer(layer);
-  const reference = checked.deltaT === 0 ? { ...checked, deltaT: 1 } : checked;
   return findDepthCrossing({
     margin: (depth) => {
-      const atDepth = { ...reference, depth };
+      const atDepth = { ...checked, depth };
       return onsetMargin(layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: false })).cellMargin;
     },
     startDepth: checked.depth,

@@ -37,10 +37,9 @@ export function minStableDepth(layer: PhysicalLayer, options: DepthSearchOptions
       message: 'Only a free surface can deform, so there is no long-wave thinning limit for this top.',
     } as const);
   }
-  const reference = checked.deltaT === 0 ? { ...checked, deltaT: 1 } : checked;
   return findDepthCrossing({
     margin: (depth) => {
-      const atDepth = { ...reference, depth };
+      const atDepth = { ...checked, depth };
       return onsetMargin(layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: true })).longWaveMargin;
     },
     startDepth: checked.depth,

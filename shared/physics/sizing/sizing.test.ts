@@ -133,3 +133,36 @@ describe('quietWindow', () => {
     expect(() => quietWindow(marangoniLayer, { depthMin: 1e-3, depthMax: 1e-4, deltaTMin: 0, deltaTMax: 1 })).toThrow(/depthMax must be > depthMin/);
   });
 });
+
+describe('evaluateLayer: robustness over finite inputs (property-based)', () => {
+  it('property: no exception and no NaN margin for any valid finite layer', () => {
+    const layer = fc.record({
+      bottom: fc.constantFrom('rigid' as const, 'free' as const),
+      bottomThermal: fc.constantFrom('conducting' as const, 'insulating' as const),
+      top: fc.constantFrom('rigid' as const, 'free' as const, 'surface' as const),
+      density: fc.double({ min: 500, max: 8000, noNaN: true }),
+      viscosity: fc.double({ min: 1e-4, max: 10, noNaN: true }),
+      conductivity: fc.double({ min: 0.05, max: 50, noNaN: true }),
+      heatCapacity: fc.double({ min: 300, max: 5000, noNaN: true }),
+      expansion: fc.double({ min: -1e-3, max: 2e-3, noNaN: true }),
+      surfaceTension: fc.double({ min: 0.01, max: 2, noNaN: true }),
+      dSigmaDT: fc.double({ min: -5e-4, max: 5e-4, noNaN: true }),
+      depth: fc.double({ min: 1e-6, max: 0.05, noNaN: true }),
+      deltaT: fc.double({ min: -50, max: 50, noNaN: true }),
+      heatTransfer: fc.double({ min: 0, max: 1e4, noNaN: true }),
+      gravity: fc.double({ min: 0, max: 20, noNaN: true }),
+    });
+    fc.assert(
+      fc.property(layer, (l) => {
+        const r = evaluateLayer(l, { maxDepth: 1 });
+        expect(Number.isNaN(r.margin)).toBe(false);
+        expect(r.margin).toBeLessThanOrEqual(r.cellMargin);
+        expect(Number.isNaN(r.maxDeltaT.mostDangerous)).toBe(false);
+      }),
+      { numRuns: 25 },
+    );
+  }, 120_000);
+  it('with no temperature drop there is no depth bound (no onset at any depth)', () => {
+    expect(maxStableDepth({ ...marangoniLayer, deltaT: 0 })).toMatchObject({ found: false, reason: 'quiet-throughout-range' });
+  });
+});
