@@ -52,7 +52,9 @@ function useRedirectWhenSessionEnds() {
   const location = useLocation();
   useEffect(() => {
     const onUnauthenticated = (error: unknown) => {
-      if (isApiError(error) && error.status === 401) {
+      // Only a missing/expired session ('unauthenticated'); a 401 for a wrong password typed to
+      // confirm a signature ('invalid_credentials') belongs to that form, not to a redirect.
+      if (isApiError(error) && error.status === 401 && error.code === 'unauthenticated') {
         void navigate(signInPath(location.pathname + location.search), { replace: true });
       }
     };
