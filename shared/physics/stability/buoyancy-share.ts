@@ -31,6 +31,10 @@ export function buoyancyShare(problem: CheckedProblem, margin: number, wavenumbe
     const evaluate = createMarginalFactorEvaluator({ ...problem, rayleigh, marangoni });
     return wavenumber > 0 ? evaluate(wavenumber) : longWaveLimit(evaluate, problem.crispation > 0 ? problem.bond : 1);
   };
+  // A single positive drive needs no single-drive solve: the rule below gives 1 or 0 whatever Ra₀ or Ma₀ is.
+  const thermocapillary = onsetMarangoni > 0 && problem.top === 'surface';
+  if (!thermocapillary) return onsetRayleigh > 0 ? 1 : 0;
+  if (!(onsetRayleigh > 0)) return 0;
   const r = onsetRayleigh > 0 ? onsetRayleigh / single(1, 0) : 0;
   const m = onsetMarangoni > 0 && problem.top === 'surface' ? onsetMarangoni / single(0, 1) : 0;
   const total = r + m;

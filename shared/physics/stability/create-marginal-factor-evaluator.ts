@@ -1,4 +1,4 @@
-import { chebyshevCollocation, type ChebyshevCollocation } from './chebyshev-collocation';
+import { chebyshevCollocationTable } from './chebyshev-collocation-table';
 import { marginalFactorAt } from './marginal-factor-at';
 import type { CheckedProblem } from './validate-problem';
 
@@ -13,8 +13,8 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
 ];
 
 /**
- * Build λ(k) for one checked problem, keeping the collocation grids it has made so far in the
- * returned closure (nothing is kept between calls of this function).
+ * Build λ(k) for one checked problem. The collocation grids come from the shared read-only table
+ * (chebyshevCollocationTable), so building an evaluator costs nothing.
  *
  * ## Method
  * Chooses the Chebyshev order from the wavenumber (12 nodes + 1 up to k = 4, rising to 36 for
@@ -29,7 +29,6 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
  * @example createMarginalFactorEvaluator(validateProblem({bottom:'free',bottomThermal:'conducting',top:'free',biot:Infinity,rayleigh:1,marangoni:0}))(Math.PI / Math.SQRT2) // ≈ 657.511
  */
 export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenumber: number) => number {
-  const grids = new Map<number, ChebyshevCollocation>();
   return (wavenumber: number): number => {
     let order = ORDER_BANDS[ORDER_BANDS.length - 1][1];
     for (const [limit, bandOrder] of ORDER_BANDS) {
@@ -38,11 +37,6 @@ export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenum
         break;
       }
     }
-    let grid = grids.get(order);
-    if (grid === undefined) {
-      grid = chebyshevCollocation(order);
-      grids.set(order, grid);
-    }
-    return marginalFactorAt(problem, grid, wavenumber);
+    return marginalFactorAt(problem, chebyshevCollocationTable(order), wavenumber);
   };
 }

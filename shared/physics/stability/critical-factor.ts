@@ -11,7 +11,8 @@ const LARGEST_WAVENUMBER = 60;
  * Minimum over the wavenumber of the marginal factor of one problem: λ* and k_c.
  *
  * ## Method
- * minimiseMarginalFactor on ln k with a coarse scan at k = 0.85, 1.45, 2.45, 4, walking
+ * minimiseMarginalFactor on ln k (from a bracket around the hint when one is given) with a
+ * coarse scan at k = 0.85, 1.45, 2.45, 4, walking
  * outwards to 0.01 ≤ k ≤ 60; below k = 0.01 the k → 0 limit (longWaveLimit, or the value supplied)
  * stands for the whole long-wave end. Short waves beyond k = 60 (cells narrower than d/10) are not
  * searched: no boundary set or drive ratio met in coating practice puts its minimum there.
@@ -23,23 +24,24 @@ const LARGEST_WAVENUMBER = 60;
  *
  * @param problem - checked problem (see validateProblem)
  * @param evaluate - λ(k) for this problem (see createMarginalFactorEvaluator)
- * @param limitAtZero - λ as k → 0 if already known [-]
- * @param scan - coarse-scan wavenumbers [1/d], increasing (default 0.85, 1.45, 2.45, 4)
+ * @param options - limitAtZero: λ as k → 0 if already known [-]; wavenumberHint: expected k_c [1/d]
+ *                  (the search starts with a bracket around it and falls back to the coarse scan,
+ *                  see minimiseMarginalFactor)
  * @returns λ* [-] (Infinity if none) and k_c [1/d] (0 for the k → 0 end, NaN if λ* is infinite)
  * @example criticalFactor(p, createMarginalFactorEvaluator(p)) // rigid/rigid with Ra = 1: ≈ { factor: 1707.762, wavenumber: 3.117 }
  */
 export function criticalFactor(
   problem: CheckedProblem,
   evaluate: (wavenumber: number) => number,
-  limitAtZero?: number,
-  scan: readonly number[] = SCAN,
+  options: { readonly limitAtZero?: number; readonly wavenumberHint?: number } = {},
 ): MarginalMinimum {
   if (problem.rayleigh === 0 && problem.marangoni === 0) return Object.freeze({ factor: Infinity, wavenumber: NaN });
   const bond = problem.crispation > 0 ? problem.bond : 1;
   return minimiseMarginalFactor(evaluate, {
-    scan,
+    scan: SCAN,
     smallest: SMALLEST_WAVENUMBER,
     largest: LARGEST_WAVENUMBER,
-    limitAtZero: () => limitAtZero ?? longWaveLimit(evaluate, bond),
+    limitAtZero: () => options.limitAtZero ?? longWaveLimit(evaluate, bond),
+    hint: options.wavenumberHint,
   });
 }

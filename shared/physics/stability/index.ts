@@ -17,6 +17,7 @@ export type {
   StabilityProblem,
   Regime,
   OnsetResult,
+  OnsetMarginOptions,
   NeutralCurveOptions,
   NeutralCurve,
   CriticalValue,

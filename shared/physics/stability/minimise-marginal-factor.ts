@@ -1,3 +1,6 @@
+import { bracketMinimumNear } from './bracket-minimum-near';
+import { refineBracketedMinimum } from './refine-bracketed-minimum';
+
 /** Minimum of λ(k) over the wavenumber. */
 export interface MarginalMinimum {
   /** Smallest λ found [-]; Infinity if λ(k) is infinite at every wavenumber tried. */
@@ -16,11 +19,15 @@ export interface MinimiseOptions {
   readonly largest: number;
   /** λ as k → 0 (for the walk past `smallest`); Infinity when the limit is not finite. */
   readonly limitAtZero: () => number;
+  /**
+   * Expected wavenumber of the minimum [1/d] (for example k_c of a neighbouring problem in a
+   * sweep); when given, finite and within (smallest, largest), the search first brackets the
+   * minimum close to it and uses the coarse scan only if that fails.
+   */
+  readonly hint?: number;
 }
 
 const STEP = 1.6; // ratio between neighbouring wavenumbers in the walk
-const LOG_TOLERANCE = 1.5e-4; // tolerance on ln k in the refinement (k to about 3e-4 relative)
-const GOLDEN = 0.381_966_011_250_105_1;
 
 /**
  * Minimise the marginal factor λ(k) over the wavenumber k > 0.
@@ -36,6 +43,12 @@ const GOLDEN = 0.381_966_011_250_105_1;
  * A second, deeper local minimum between two coarse points can be missed; the scan is chosen
  * dense enough for the neutral curves of this solver (one cellular minimum, plus the k → 0 end).
  *
+ * With a `hint` the coarse scan is replaced by bracketMinimumNear: three points at ln k = ln hint
+ * and ±0.015, widened downhill by doubling steps; the refinement then usually needs one or no
+ * further evaluation. When that bracket fails (an infinite λ, a walk that leaves the wavenumber
+ * range or keeps falling) the search starts again from the coarse scan, so a hint changes the
+ * cost, not the minimum found, for a neutral curve with a single cellular minimum.
+ *
  * ## References
  * - Brent, R. P. (1973) *Algorithms for Minimization without Derivatives*, Prentice-Hall, ch. 5.
  *
@@ -45,6 +58,10 @@ const GOLDEN = 0.381_966_011_250_105_1;
  * @example minimiseMarginalFactor((k) => (k * k + 1) ** 3 / (k * k), { scan: [0.5, 1, 2], smallest: 0.01, largest: 50, limitAtZero: () => Infinity }) // ≈ { factor: 6.75, wavenumber: 0.7071 }
  */
 export function minimiseMarginalFactor(evaluate: (wavenumber: number) => number, options: MinimiseOptions): MarginalMinimum {
+  if (options.hint !== undefined) {
+    const bracket = bracketMinimumNear(evaluate, options.hint, options.smallest, options.largest);
+    if (bracket !== null) return refineBracketedMinimum(evaluate, bracket[0], bracket[1], bracket[2]);
+  }
   const ks = [...options.scan];
   const fs = ks.map((k) => evaluate(k));
   let best = indexOfMinimum(fs);
@@ -52,7 +69,7 @@ export function minimiseMarginalFactor(evaluate: (wavenumber: number) => number,
     // No stationary mode on the grid: probe much shorter and longer waves before giving up.
     for (const k of [options.smallest * 4, Math.min(7, options.largest), Math.min(12, options.largest)]) {
       const f = evaluate(k);
-      if (Number.isFinite(f)) return minimiseMarginalFactor(evaluate, { ...options, scan: [k / STEP, k, k * STEP] });
+      if (Number.isFinite(f)) return minimiseMarginalFactor(evaluate, { ...options, hint: undefined, scan: [k / STEP, k, k * STEP] });
     }
     return Object.freeze({ factor: Infinity, wavenumber: NaN });
   }
@@ -80,63 +97,11 @@ export function minimiseMarginalFactor(evaluate: (wavenumber: number) => number,
     }
   }
   if (best === 0 || best === ks.length - 1) return Object.freeze({ factor: fs[best], wavenumber: ks[best] });
-  return brent(evaluate, [Math.log(ks[best - 1]), fs[best - 1]], [Math.log(ks[best]), fs[best]], [Math.log(ks[best + 1]), fs[best + 1]]);
+  return refineBracketedMinimum(evaluate, [Math.log(ks[best - 1]), fs[best - 1]], [Math.log(ks[best]), fs[best]], [Math.log(ks[best + 1]), fs[best + 1]]);
 }
 
 function indexOfMinimum(values: readonly number[]): number {
   let best = 0;
   for (let i = 1; i < values.length; i++) if (values[i] < values[best]) best = i;
   return best;
-}
-
-/**
- * Safeguarded successive parabolic interpolation on s = ln k inside the bracket [lower, upper]
- * around `middle` (points as [s, λ], λ(middle) lowest). Each step evaluates the vertex of the
- * parabola through the three points (a golden-section step when that vertex is unusable or a
- * value is infinite) and keeps the three points that bracket the lowest value; it stops once a
- * step is shorter than the tolerance. Near a smooth minimum λ is close to quadratic in ln k, so
- * this converges superlinearly (order ≈ 1.3), typically in 3–4 evaluations.
- */
-function brent(
-  evaluate: (k: number) => number,
-  lower: readonly [number, number],
-  middle: readonly [number, number],
-  upper: readonly [number, number],
-): MarginalMinimum {
-  let [a, fa] = lower;
-  let [x, fx] = middle;
-  let [c, fc] = upper;
-  for (let iter = 0; iter < 40; iter++) {
-    let u = NaN;
-    if (Number.isFinite(fa) && Number.isFinite(fc)) {
-      const r = (x - a) * (fx - fc);
-      const q = (x - c) * (fx - fa);
-      const denominator = 2 * (r - q);
-      if (denominator !== 0) u = x - ((x - a) * r - (x - c) * q) / denominator;
-    }
-    const margin = LOG_TOLERANCE;
-    if (!(u > a + margin && u < c - margin)) u = c - x > x - a ? x + GOLDEN * (c - x) : x - GOLDEN * (x - a);
-    if (Math.abs(u - x) < margin) u = c - x > x - a ? x + margin : x - margin;
-    const fu = evaluate(Math.exp(u));
-    const step = Math.abs(u - x);
-    if (fu < fx) {
-      if (u < x) {
-        c = x;
-        fc = fx;
-      } else {
-        a = x;
-        fa = fx;
-      }
-      x = u;
-      fx = fu;
-    } else if (u < x) {
-      a = u;
-      fa = fu;
-    } else {
-      c = u;
-      fc = fu;
-    }
-    if (step <= 1.5 * margin || c - a < 4 * margin) break;
-  }
-  return Object.freeze({ factor: fx, wavenumber: Math.exp(x) });
 }

@@ -3,7 +3,7 @@ import { classifyRegime } from './classify-regime';
 import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
 import { criticalFactor } from './critical-factor';
 import { longWaveLimit } from './long-wave-limit';
-import type { OnsetResult, StabilityProblem } from './types';
+import type { OnsetMarginOptions, OnsetResult, StabilityProblem } from './types';
 import { validateProblem } from './validate-problem';
 
 /**
@@ -18,10 +18,13 @@ import { validateProblem } from './validate-problem';
  *    deformable problem → longWaveMargin (for Ra = 0 and a rigid conducting bottom it equals
  *    VanHook et al.'s Ma_LW = (2/3)Ga(1 + Bi); with buoyancy λ_LW = (2/3)Ga(1 + Bi)/(Ma +
  *    (11/60)Bi·Ra), derived in marginal-factor-at.ts), and the deformable problem minimised over
- *    k (scan started around the flat k_c). The most dangerous mode is the lower of the two; it is
+ *    k (search started with a bracket around the flat k_c). The most dangerous mode is the lower of the two; it is
  *    long-wave when the k → 0 limit wins. With a flat surface the cellular result is the answer
  *    (its minimum may itself lie at k → 0, for example with two insulating walls, reported as
  *    wavenumber 0 but not as long-wave thinning, which needs a deforming surface).
+ *    With options.wavenumberHint (for example the cellWavenumber of the previous depth in a sweep)
+ *    step 1 starts with a narrow bracket around the hint instead of the coarse scan; when that
+ *    bracket fails the coarse scan runs as without a hint (see minimiseMarginalFactor).
  * 3. buoyancyShare at the onset mode (see buoyancyShare) and the regime (see classifyRegime).
  * λ* ≥ 1 means quiet; λ* scales as 1/ΔT at fixed Bi, Cr, Bo.
  *
@@ -35,17 +38,20 @@ import { validateProblem } from './validate-problem';
  *
  * @param problem - boundaries and operating point: rayleigh, marangoni [-] (any sign), biot [-] ≥ 0
  *                  (Infinity = conducting top), crispation [-] ≥ 0 and bond [-] ≥ 0 (top 'surface')
+ * @param options - wavenumberHint: expected flat cellular k_c [1/d], finite > 0 (optional; only
+ *                  changes where the search starts)
  * @returns frozen OnsetResult. margin and cellMargin are Infinity when no stationary onset exists
  *          along the ray (both drives stabilising, or Ra = Ma = 0); then criticalWavenumber,
  *          cellWavenumber and buoyancyShare are NaN, mechanism is 'none', regime 'quiet', and
  *          onsetRayleigh/onsetMarangoni are ±Infinity (0 for a zero drive).
- * @throws RangeError naming the field when an input is non-finite or out of range
+ * @throws RangeError naming the field when an input is non-finite or out of range (wavenumberHint included)
  * @example onsetMargin({ bottom: 'rigid', bottomThermal: 'conducting', top: 'surface', biot: 0, rayleigh: 0, marangoni: 40 }).margin // ≈ 1.990 (Pearson 79.607/40): quiet
  */
-export function onsetMargin(problem: StabilityProblem): OnsetResult {
+export function onsetMargin(problem: StabilityProblem, options: OnsetMarginOptions = {}): OnsetResult {
   const checked = validateProblem(problem);
+  const wavenumberHint = validateWavenumberHint(options?.wavenumberHint);
   const flat = checked.crispation > 0 ? { ...checked, crispation: 0 } : checked;
-  const cell = criticalFactor(flat, createMarginalFactorEvaluator(flat));
+  const cell = criticalFactor(flat, createMarginalFactorEvaluator(flat), { wavenumberHint });
 
   let margin = cell.factor;
   let wavenumber = cell.wavenumber;
@@ -55,10 +61,10 @@ export function onsetMargin(problem: StabilityProblem): OnsetResult {
   if (checked.crispation > 0) {
     const evaluate = createMarginalFactorEvaluator(checked);
     longWaveMargin = longWaveLimit(evaluate, checked.bond);
-    // The cellular minimum of the deformable problem lies near the flat one: start the scan there
-    // (the walk still moves outwards if λ keeps falling).
-    const near = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? [cell.wavenumber / 1.25, cell.wavenumber, cell.wavenumber * 1.25] : undefined;
-    const deformable = criticalFactor(checked, evaluate, longWaveMargin, near);
+    // The cellular minimum of the deformable problem lies near the flat one: bracket it there
+    // (widening downhill, and the full scan if that fails).
+    const near = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? cell.wavenumber : undefined;
+    const deformable = criticalFactor(checked, evaluate, { limitAtZero: longWaveMargin, wavenumberHint: near });
     modeProblem = checked;
     if (longWaveMargin <= deformable.factor && Number.isFinite(longWaveMargin)) {
       margin = longWaveMargin;
@@ -87,6 +93,13 @@ export function onsetMargin(problem: StabilityProblem): OnsetResult {
     regime,
     mechanism: mechanism === 'quiet' ? 'none' : mechanism,
   });
+}
+
+function validateWavenumberHint(hint: unknown): number | undefined {
+  if (hint === undefined) return undefined;
+  if (typeof hint !== 'number' || !Number.isFinite(hint) || hint <= 0)
+    throw new RangeError(`wavenumberHint must be a finite number > 0 [1/d] when given, got ${String(hint)}`);
+  return hint;
 }
 
 function scaleDrive(factor: number, drive: number): number {

@@ -71,6 +71,17 @@ export interface OnsetResult {
   mechanism: Exclude<Regime, 'quiet'> | 'none';
 }
 
+/** Options of onsetMargin. */
+export interface OnsetMarginOptions {
+  /**
+   * Expected critical wavenumber of the flat cellular mode [1/d], finite and > 0: for example the
+   * cellWavenumber of a neighbouring depth in a sweep. The search brackets the minimum around it
+   * first and falls back to the full coarse scan when that bracket fails; it changes the cost,
+   * not the answer. Omit for a cold search.
+   */
+  wavenumberHint?: number;
+}
+
 /** Options of neutralCurve. */
 export interface NeutralCurveOptions {
   /** Smallest wavenumber [1/d], > 0; default 0.1. */

@@ -1,0 +1,35 @@
+import { chebyshevCollocation, type ChebyshevCollocation } from './chebyshev-collocation';
+
+/**
+ * Chebyshev collocation grids by order, built once and then shared (read-only).
+ *
+ * This is the solver's only module-level table. It is pure in effect: the grid of an order is a
+ * fixed mathematical object (nodes and differentiation matrices depend on the order alone), it
+ * is built lazily on first use by the same deterministic function whatever the caller, every
+ * array is frozen against re-assignment of the object and never written by the solver (the kernel
+ * only reads d1…d4), and no caller can observe whether a grid came from the table or was freshly
+ * built. It only saves rebuilding the same matrices (≈ 3·n³ operations) for every evaluator.
+ */
+const GRIDS = new Map<number, ChebyshevCollocation>();
+
+/**
+ * The collocation grid of one order, from the lazily built table.
+ *
+ * ## Method
+ * Looks the order up; on a miss builds it with chebyshevCollocation and keeps it.
+ *
+ * ## References
+ * - Trefethen, L. N. (2000) *Spectral Methods in MATLAB*, SIAM, ch. 6. doi:10.1137/1.9780898719598
+ *
+ * @param order - polynomial order N [-], integer ≥ 4
+ * @returns the shared grid (treat as read-only)
+ * @example chebyshevCollocationTable(12).size // 13
+ */
+export function chebyshevCollocationTable(order: number): ChebyshevCollocation {
+  let grid = GRIDS.get(order);
+  if (grid === undefined) {
+    grid = chebyshevCollocation(order);
+    GRIDS.set(order, grid);
+  }
+  return grid;
+}
