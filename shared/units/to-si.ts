@@ -10,7 +10,8 @@ import { unitMath } from './unit-math';
  * Conversion factors come from the units library's unit definitions (exact where the definitions are
  * exact, e.g. 1 in = 0.0254 m, 1 dyn = 10⁻⁵ N). An absolute temperature keeps the scale offset
  * (T/K = t/°C + 273.15; T/K = (t/°F + 459.67)·5/9). A temperature *difference* is converted as the
- * difference of two conversions, value − 0 in the same unit, which drops the offset: 1 °F = 5/9 K.
+ * size of one degree found as the difference of two conversions (1 and 0 in that unit), which drops
+ * the offset: 1 °F = 5/9 K.
  * Absolute temperatures at or below 0 K are refused.
  *
  * ## References
@@ -32,7 +33,10 @@ export function toSi<K extends QuantityKind>(value: number, unitText: string, ki
   const { normalized } = resolveUnit(unitText, kind);
   let si: number;
   if (kind === 'temperatureDifference') {
-    si = unitMath.unit(value, normalized).toNumber('K') - unitMath.unit(0, normalized).toNumber('K');
+    // Size of one degree of the unit (difference of two conversions), then scale: subtracting the
+    // converted value and zero directly would lose digits to the offset for small differences.
+    const degree = unitMath.unit(1, normalized).toNumber('K') - unitMath.unit(0, normalized).toNumber('K');
+    si = value * degree;
   } else {
     si = unitMath.unit(value, normalized).toNumber(info.siUnit);
   }

@@ -139,3 +139,21 @@ describe('constants', () => {
     expect(MOLAR_GAS_CONSTANT).toBe(8.31446261815324); // CODATA 2018, exact
   });
 });
+
+describe('parse and format round trip (property-based)', () => {
+  it('property: formatting an SI value in any listed unit and reading it back returns the value', async () => {
+    const fc = (await import('fast-check')).default;
+    const { quantityKinds } = await import('./quantity-kinds');
+    const kinds = Object.keys(quantityKinds) as (keyof typeof quantityKinds)[];
+    fc.assert(
+      fc.property(fc.constantFrom(...kinds), fc.double({ min: 1e-3, max: 1e3, noNaN: true }), fc.nat(), (kind, scale, pick) => {
+        const units = quantityKinds[kind].units;
+        const unit = units[pick % units.length];
+        const si = kind === 'temperature' ? 200 + scale : scale * 1e-3;
+        const text = formatQuantity(si, kind, unit, 15);
+        expect(Math.abs(parseQuantity(text, kind) / si - 1)).toBeLessThan(1e-12);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
