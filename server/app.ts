@@ -3,7 +3,6 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express, { type Express } from 'express';
-import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Database } from './db/client';
 import type { Env } from './env';
@@ -12,6 +11,8 @@ import type { AppDeps, RateLimitSettings } from './http/app-deps';
 import { assertEveryApiRouteIsDefined, createApiRouter } from './http/define-route';
 import { createErrorHandler } from './middleware/error-handler';
 import { apiNotFound } from './middleware/not-found';
+import { csrfOriginCheck } from './middleware/csrf';
+import { securityHeaders } from './middleware/security-headers';
 import { registerAuditRoutes } from './features/audit/audit.routes';
 import { registerAuthRoutes } from './features/auth/auth.routes';
 import { registerConfigRoutes } from './features/config/config.routes';
@@ -56,7 +57,7 @@ export function createApp(input: CreateAppDeps): Express {
 
   const app = express();
   app.disable('x-powered-by');
-  app.use(helmet());
+  app.use(securityHeaders(input.env));
   app.use(
     pinoHttp({
       logger,
@@ -71,6 +72,7 @@ export function createApp(input: CreateAppDeps): Express {
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
+  app.use(csrfOriginCheck(input.env));
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
 
   const api = createApiRouter(deps);
