@@ -4,7 +4,8 @@
  *
  * - marginalFactor(problem, wavenumber): λ(k)
  * - neutralCurve(problem, options)
- * - onsetMargin(problem): OnsetResult (the Onset margin and its regime)
+ * - onsetMargin(problem, options?): OnsetResult (the Onset margin and its regime)
+ * - onsetMarginSweep(problems): OnsetResult[] (neighbouring problems, each search started at the previous k_c)
  * - criticalRayleigh(boundaries), criticalMarangoni(boundaries)
  * - classifyRegime({ margin, buoyancyShare, longWave })
  * - regimeLabels
@@ -27,6 +28,7 @@ export { regimeLabels } from './regime-labels';
 export { marginalFactor } from './marginal-factor';
 export { neutralCurve } from './neutral-curve';
 export { onsetMargin } from './onset-margin';
+export { onsetMarginSweep } from './onset-margin-sweep';
 export { criticalRayleigh } from './critical-rayleigh';
 export { criticalMarangoni } from './critical-marangoni';
 export { classifyRegime, BUOYANCY_DOMINANT_SHARE, SURFACE_TENSION_DOMINANT_SHARE } from './classify-regime';

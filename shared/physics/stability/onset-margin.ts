@@ -1,8 +1,4 @@
-import { buoyancyShare } from './buoyancy-share';
-import { classifyRegime } from './classify-regime';
-import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
-import { criticalFactor } from './critical-factor';
-import { longWaveLimit } from './long-wave-limit';
+import { solveOnsetMargin } from './solve-onset-margin';
 import type { OnsetMarginOptions, OnsetResult, StabilityProblem } from './types';
 import { validateProblem } from './validate-problem';
 
@@ -50,49 +46,7 @@ import { validateProblem } from './validate-problem';
 export function onsetMargin(problem: StabilityProblem, options: OnsetMarginOptions = {}): OnsetResult {
   const checked = validateProblem(problem);
   const wavenumberHint = validateWavenumberHint(options?.wavenumberHint);
-  const flat = checked.crispation > 0 ? { ...checked, crispation: 0 } : checked;
-  const cell = criticalFactor(flat, createMarginalFactorEvaluator(flat), { wavenumberHint });
-
-  let margin = cell.factor;
-  let wavenumber = cell.wavenumber;
-  let longWave = false;
-  let longWaveMargin = Infinity;
-  let modeProblem = flat;
-  if (checked.crispation > 0) {
-    const evaluate = createMarginalFactorEvaluator(checked);
-    longWaveMargin = longWaveLimit(evaluate, checked.bond);
-    // The cellular minimum of the deformable problem lies near the flat one: bracket it there
-    // (widening downhill, and the full scan if that fails).
-    const near = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? cell.wavenumber : undefined;
-    const deformable = criticalFactor(checked, evaluate, { limitAtZero: longWaveMargin, wavenumberHint: near });
-    modeProblem = checked;
-    if (longWaveMargin <= deformable.factor && Number.isFinite(longWaveMargin)) {
-      margin = longWaveMargin;
-      wavenumber = 0;
-      longWave = true;
-    } else {
-      margin = deformable.factor;
-      wavenumber = deformable.wavenumber;
-    }
-  }
-
-  const finite = Number.isFinite(margin);
-  const share = finite ? buoyancyShare(modeProblem, margin, wavenumber) : NaN;
-  const regime = finite ? classifyRegime({ margin, buoyancyShare: share, longWave }) : 'quiet';
-  const mechanism = finite ? classifyRegime({ margin: 0, buoyancyShare: share, longWave }) : 'none';
-  return Object.freeze({
-    margin,
-    criticalWavenumber: finite ? wavenumber : NaN,
-    longWave,
-    cellMargin: cell.factor,
-    cellWavenumber: Number.isFinite(cell.factor) ? cell.wavenumber : NaN,
-    longWaveMargin,
-    onsetRayleigh: scaleDrive(margin, problem.rayleigh),
-    onsetMarangoni: scaleDrive(margin, problem.marangoni),
-    buoyancyShare: share,
-    regime,
-    mechanism: mechanism === 'quiet' ? 'none' : mechanism,
-  });
+  return solveOnsetMargin(checked, problem, { cell: wavenumberHint }).result;
 }
 
 function validateWavenumberHint(hint: unknown): number | undefined {
@@ -100,8 +54,4 @@ function validateWavenumberHint(hint: unknown): number | undefined {
   if (typeof hint !== 'number' || !Number.isFinite(hint) || hint <= 0)
     throw new RangeError(`wavenumberHint must be a finite number > 0 [1/d] when given, got ${String(hint)}`);
   return hint;
-}
-
-function scaleDrive(factor: number, drive: number): number {
-  return drive === 0 ? 0 : factor * drive;
 }
