@@ -5,3 +5,4 @@ export * from './fluids';
 export * from './layer-checks';
 export * from './beyond-onset';
 export * from './sheets';
+export * from './gauge-log';
