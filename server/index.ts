@@ -7,6 +7,7 @@ import { createDatabase } from './db/client';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
 import { createMailTransport, startOutboxDispatcher } from './mail';
+import { startServerJobs } from './jobs/start-server-jobs';
 
 export interface StartedServer {
   /** Where the app answers, e.g. http://127.0.0.1:3000 (the real port when 0 was asked for). */
@@ -44,6 +45,9 @@ export async function startServer(options: { port?: number; host?: string } = {}
   const app = createApp({ db, env: { ...env, PORT: address.port, PUBLIC_URL: publicUrl }, logger });
   server.on('request', app);
 
+  // Job queue and its worker (large Property spreads); JOBS_ENABLED=false leaves them off.
+  const jobs = await startServerJobs({ databaseUrl: env.DATABASE_URL, db, logger });
+
   const transport = createMailTransport({ smtpUrl: env.SMTP_URL, fakePort: env.SMTP_FAKE_PORT });
   const dispatcher = startOutboxDispatcher({
     db,
@@ -64,6 +68,7 @@ export async function startServer(options: { port?: number; host?: string } = {}
       await stopped;
       clearTimeout(force);
       await dispatcher.stop();
+      await jobs.stop();
       transport.close();
       await pool.end();
       logger.info('QuietLayer stopped');

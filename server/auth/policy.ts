@@ -43,6 +43,18 @@ export const policy = {
   'layerChecks.write': ['engineer'],
   'layerChecks.evaluate': SIGNED_IN,
   'batch.evaluate': ['engineer'],
+  // Beyond onset (issue 7): anyone signed in may evaluate and read; engineers save set-ups, run
+  // spreads (they are stored with the check revision) and keep the heats register.
+  'dryingPaths.evaluate': SIGNED_IN,
+  'dryingPaths.read': SIGNED_IN,
+  'dryingPaths.write': ['engineer'],
+  'propertySpreads.read': SIGNED_IN,
+  'propertySpreads.run': ['engineer'],
+  'meltPool.evaluate': SIGNED_IN,
+  'meltPool.read': SIGNED_IN,
+  'meltPool.write': ['engineer'],
+  'heats.read': SIGNED_IN,
+  'heats.write': ['engineer'],
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policy;
