@@ -16,6 +16,9 @@ export interface NavItem {
  */
 export const navigation: readonly NavItem[] = [
   { label: 'Home', to: paths.home, roles: roleValues },
+  { label: 'Fluids', to: paths.fluids, roles: roleValues },
+  { label: 'Layer checks', to: paths.layerChecks, roles: roleValues },
+  { label: 'Batch', to: paths.batch, roles: ['engineer'] },
   { label: 'Users', to: paths.adminUsers, roles: ['administrator'] },
   { label: 'Audit trail', to: paths.adminAudit, roles: ['administrator'] },
   { label: 'Outbox', to: paths.adminOutbox, roles: ['administrator'] },

@@ -8,6 +8,9 @@ export const paths = {
   adminUsers: '/admin/users',
   adminOutbox: '/admin/outbox',
   adminAudit: '/admin/audit',
+  fluids: '/fluids',
+  layerChecks: '/layer-checks',
+  batch: '/batch',
 } as const;
 
 /** The sign-in URL that returns to `next` afterwards. */

@@ -57,7 +57,7 @@ export function toApiError(status: number, body: unknown): ApiError {
   });
 }
 
-type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 interface RequestOptions<S extends z.ZodType | undefined> {
   body?: unknown;
@@ -109,8 +109,10 @@ async function request<S extends z.ZodType | undefined = undefined>(
 export const api = {
   get: <S extends z.ZodType | undefined = undefined>(path: string, query?: QueryParams, options: { schema?: S; signal?: AbortSignal } = {}) =>
     request<S>('GET', path, { query, ...options }),
-  post: <S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, options: { schema?: S } = {}) =>
+  post: <S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, options: { schema?: S; signal?: AbortSignal } = {}) =>
     request<S>('POST', path, { body, ...options }),
+  put: <S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, options: { schema?: S } = {}) =>
+    request<S>('PUT', path, { body, ...options }),
   patch: <S extends z.ZodType | undefined = undefined>(path: string, body?: unknown, options: { schema?: S } = {}) =>
     request<S>('PATCH', path, { body, ...options }),
   delete: <S extends z.ZodType | undefined = undefined>(path: string, query?: QueryParams, options: { schema?: S } = {}) =>
