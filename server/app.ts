@@ -22,6 +22,7 @@ import { registerOutboxRoutes } from './features/outbox/outbox.routes';
 import { registerUsersRoutes } from './features/users/users.routes';
 import { registerFluidsRoutes } from './features/fluids/fluids.routes';
 import { registerLayerChecksRoutes } from './features/layer-checks/layer-checks.routes';
+import { registerSheetsRoutes } from './features/sheets/sheets.routes';
 import { registerDryingPathsRoutes } from './features/drying-paths/drying-paths.routes';
 import { registerPropertySpreadsRoutes } from './features/property-spreads/property-spreads.routes';
 import { registerMeltPoolRoutes } from './features/melt-pool/melt-pool.routes';
@@ -88,6 +89,7 @@ export function createApp(input: CreateAppDeps): Express {
   registerOutboxRoutes(api);
   registerFluidsRoutes(api);
   registerLayerChecksRoutes(api);
+  registerSheetsRoutes(api);
   registerDryingPathsRoutes(api);
   registerPropertySpreadsRoutes(api);
   registerMeltPoolRoutes(api);

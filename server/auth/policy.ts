@@ -55,6 +55,14 @@ export const policy = {
   'meltPool.write': ['engineer'],
   'heats.read': SIGNED_IN,
   'heats.write': ['engineer'],
+  // Process sheets (issue 5): engineers issue and submit, QA reviewers return or sign; everyone reads
+  // and may verify a PDF. Who may sign a particular sheet (not its author) is checked in the workflow.
+  'sheets.read': SIGNED_IN,
+  'sheets.create': ['engineer'],
+  'sheets.submit': ['engineer'],
+  'sheets.return': ['reviewer'],
+  'sheets.sign': ['reviewer'],
+  'sheets.verify': SIGNED_IN,
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policy;
