@@ -32,8 +32,10 @@ import {
   updateCheckIfVersion,
   type LayerCheckWithNames,
 } from './layer-checks.repository';
+import { createEvaluationMemo } from './evaluation-memo';
 
 const actorOf = (user: CurrentUser) => ({ id: user.id, email: user.email });
+const evaluationMemo = createEvaluationMemo<ReturnType<typeof evaluateLayerCheck>>();
 
 function throwFields(fields: Record<string, string>): never {
   const [path, message] = Object.entries(fields)[0];
@@ -42,7 +44,7 @@ function throwFields(fields: Record<string, string>): never {
 
 /** Evaluates or throws 422 naming the fields. */
 function evaluateOrThrow(check: LayerFields, laws: FluidLaws, archived: boolean): LayerEvaluation {
-  const result = evaluateLayerCheck(check, laws, { archived });
+  const result = evaluationMemo.remember(check, laws, archived, () => evaluateLayerCheck(check, laws, { archived }));
   if (!result.ok) throwFields(result.fields);
   return result.value;
 }
