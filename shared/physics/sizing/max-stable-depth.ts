@@ -29,10 +29,15 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  */
 export function maxStableDepth(layer: PhysicalLayer, options: DepthSearchOptions = {}): DepthBound {
   const checked = validatePhysicalLayer(layer);
+  let wavenumberHint: number | undefined;
   return findDepthCrossing({
     margin: (depth) => {
       const atDepth = { ...checked, depth };
-      return onsetMargin(layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: false })).cellMargin;
+      const problem = layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: false });
+      // Start the wavenumber search where the previous trial depth had its minimum (a hint only).
+      const result = onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
+      if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) wavenumberHint = result.cellWavenumber;
+      return result.cellMargin;
     },
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,

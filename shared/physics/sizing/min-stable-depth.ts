@@ -37,10 +37,15 @@ export function minStableDepth(layer: PhysicalLayer, options: DepthSearchOptions
       message: 'Only a free surface can deform, so there is no long-wave thinning limit for this top.',
     } as const);
   }
+  let wavenumberHint: number | undefined;
   return findDepthCrossing({
     margin: (depth) => {
       const atDepth = { ...checked, depth };
-      return onsetMargin(layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: true })).longWaveMargin;
+      const problem = layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: true });
+      // Start the wavenumber search where the previous trial depth had its minimum (a hint only).
+      const result = onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
+      if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) wavenumberHint = result.cellWavenumber;
+      return result.longWaveMargin;
     },
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,

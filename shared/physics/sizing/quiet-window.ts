@@ -18,7 +18,9 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  * onset boundary ΔT(d) is λ*(d, ±1 K)·(±1 K) for the flat cellular mode, the long-wave mode and the
  * most dangerous of the two. Depths are spaced logarithmically by default. Not every depth is solved:
  * margins are sampled adaptively and interpolated in log–log coordinates to a relative tolerance
- * (default 10⁻³, {@link sampleDepthOnsets}); `tolerance: 0` solves every depth.
+ * (default 10⁻³, {@link sampleDepthOnsets}); `tolerance: 0` solves every depth. Each solve starts its
+ * wavenumber search at the critical wavenumber of the nearest depth already solved (a hint only: the
+ * solver falls back to a full scan when the bracket fails, so results are unchanged).
  *
  * ## References
  * - Pearson J. R. A. (1958) J. Fluid Mech. 4, 489–500. doi:10.1017/S0022112058000616
@@ -49,14 +51,33 @@ export function quietWindow(layer: PhysicalLayer, options: QuietWindowOptions): 
   });
   const deltaTs = Array.from({ length: deltaTPoints }, (_, j) => deltaTMin + ((deltaTMax - deltaTMin) * j) / (deltaTPoints - 1));
 
-  const solveAt = (depth: number, deltaT: number) => {
+  const solveAt = (depth: number, deltaT: number, wavenumberHint?: number) => {
     const atPoint = { ...checked, depth, deltaT };
-    return onsetMargin(layerStabilityProblem(atPoint, layerGroups(atPoint), { deformable: true }));
+    const problem = layerStabilityProblem(atPoint, layerGroups(atPoint), { deformable: true });
+    return onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
+  };
+  // Start each wavenumber search at the critical wavenumber of the nearest depth already solved.
+  const sweep = (deltaT: number) => {
+    const known: { logDepth: number; wavenumber: number }[] = [];
+    return (depth: number) => {
+      const logDepth = Math.log(depth);
+      let hint: number | undefined;
+      let distance = Infinity;
+      for (const k of known) {
+        if (Math.abs(k.logDepth - logDepth) < distance) {
+          distance = Math.abs(k.logDepth - logDepth);
+          hint = k.wavenumber;
+        }
+      }
+      const result = solveAt(depth, deltaT, hint);
+      if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) known.push({ logDepth, wavenumber: result.cellWavenumber });
+      return result;
+    };
   };
   const tolerance = options.tolerance ?? 1e-3;
   if (!(tolerance >= 0 && tolerance < 0.1)) throw new RangeError(`tolerance must be within 0–0.1, got ${tolerance}`);
-  const fromBelow = deltaTMax > 0 ? sampleDepthOnsets(depths, (d) => solveAt(d, 1), { tolerance }) : [];
-  const fromAbove = deltaTMin < 0 ? sampleDepthOnsets(depths, (d) => solveAt(d, -1), { tolerance }) : [];
+  const fromBelow = deltaTMax > 0 ? sampleDepthOnsets(depths, sweep(1), { tolerance }) : [];
+  const fromAbove = deltaTMin < 0 ? sampleDepthOnsets(depths, sweep(-1), { tolerance }) : [];
   const curve = (results: DepthOnset[], sign: number, pick: (r: DepthOnset) => number) =>
     results.map((r) => finiteOrNull(pick(r) * sign));
 
