@@ -1,7 +1,8 @@
 /**
  * Margins benchmark (standalone; run by `npm run bench` or `npm run bench -- margins`).
  * Prints medians against the design targets:
- * - 10,000 Onset margins of physical layers with varied properties (deformable surface included) ≤ 3 s;
+ * - 10,000 Onset margins of physical layers with varied properties ≤ 3 s, with the deformable surface
+ *   (the batch and Layer check path) and with a flat surface;
  * - a 200-depth Quiet window (adaptive sampling, default tolerance 1e-3) ≤ 100 ms;
  * and, for information, the same window with every depth solved and one full evaluateLayer
  * (groups, onset, both depth searches). Exits 0 either way; a miss is printed as MISSED with the factor.
@@ -85,6 +86,14 @@ const margins = time(3, () => {
   return quiet;
 });
 report('10,000 Onset margins, varied properties (deformable)', margins.ms, 3000, `(${margins.last} quiet)`);
+const flatMargins = time(3, () => {
+  let quiet = 0;
+  for (const layer of layers) {
+    if (onsetMargin(layerStabilityProblem(layer, layerGroups(layer), { deformable: false })).margin >= 1) quiet += 1;
+  }
+  return quiet;
+});
+report('10,000 Onset margins, varied properties (flat surface)', flatMargins.ms, 3000, `(${flatMargins.last} quiet)`);
 
 const windowOptions = { depthMin: 1e-5, depthMax: 1e-2, deltaTMin: 0, deltaTMax: 30, depthPoints: 200, deltaTPoints: 60 };
 const adaptive = time(5, () => quietWindow(solventFilm, windowOptions));
