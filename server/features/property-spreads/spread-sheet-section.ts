@@ -42,7 +42,7 @@ export function spreadSheetSection(spread: PropertySpread): SheetSection {
     { label: 'Onset margin, 5th / 50th / 95th percentile', value: `${sig(p.p5)} × / ${sig(p.p50)} × / ${sig(p.p95)} ×` },
     ...r.sensitivity.slice(0, 3).map((s, i) => ({
       label: i === 0 ? 'Moves the margin most' : `Next (${i + 1})`,
-      value: `${label(s.name)}: rank correlation ${formatSignificant(s.rankCorrelation, 2)} (a larger value ${s.direction} the margin)`,
+      value: `${label(s.name)}: rank correlation ${formatSignificant(s.rankCorrelation, 2)} (scaling it up ${s.direction} the margin)`,
     })),
     { label: 'Evaluator', value: r.method === 'surrogate' ? 'validated response surface of the stability solver' : 'full stability solver per sample' },
   ];
