@@ -12,6 +12,7 @@ import { assertEveryApiRouteIsDefined, createApiRouter } from './http/define-rou
 import { createErrorHandler } from './middleware/error-handler';
 import { apiNotFound } from './middleware/not-found';
 import { csrfOriginCheck } from './middleware/csrf';
+import { databaseUnavailableGuard } from './middleware/db-unavailable';
 import { securityHeaders } from './middleware/security-headers';
 import { registerAuditRoutes } from './features/audit/audit.routes';
 import { registerAuthRoutes } from './features/auth/auth.routes';
@@ -76,6 +77,7 @@ export function createApp(input: CreateAppDeps): Express {
       customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
+  app.use(databaseUnavailableGuard({ databaseUrl: input.env.DATABASE_URL }));
   app.use(csrfOriginCheck(input.env));
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
 
