@@ -296,9 +296,9 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
     for (const r of input.returns) w.paragraph(`${utc(r.returnedAt)}, ${r.reviewerName}: ${r.comments}`, { size: 8.5 });
   }
 
-  // Signature block.
+  // Signature block (heading and box stay together on one page).
+  w.ensure(160);
   w.heading('Signature');
-  w.ensure(120);
   const sy = doc.y;
   doc.save().lineWidth(0.8).strokeColor('#475569').rect(w.left, sy, w.width, 104).stroke().restore();
   const sig = input.signature;
