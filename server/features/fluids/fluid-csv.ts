@@ -47,7 +47,9 @@ export function fluidsToCsv(inputs: FluidInput[]): string {
     row.viscosity_distribution = v.distribution ?? 'normal';
     return fluidCsvColumns.map((c) => row[c]);
   });
-  return Papa.unparse({ fields: [...fluidCsvColumns], data: rows }, { newline: '\r\n' });
+  // escapeFormulae: a cell starting with = + - @ tab or CR gets a leading ' so a spreadsheet shows it as
+  // text, never runs it (OWASP, "CSV Injection"); parseFluidCsv drops that ' again on import.
+  return Papa.unparse({ fields: [...fluidCsvColumns], data: rows }, { newline: '\r\n', escapeFormulae: true });
 }
 
 /** Dotted input path → the CSV column a person should look at. */
@@ -133,7 +135,7 @@ export function parseFluidCsv(text: string): { columns: string[]; rows: ParsedCs
   for (const record of records.slice(1)) {
     const cell = (column: string) => {
       const index = header.indexOf(column);
-      return index >= 0 && index < record.cells.length ? record.cells[index].trim() : '';
+      return index >= 0 && index < record.cells.length ? record.cells[index].replace(/^'(?=[=+\-@\t\r])/, '').trim() : '';
     };
     const rowErrors: CsvLineError[] = [];
     if (record.cells.length !== header.length) {
