@@ -21,14 +21,14 @@ export const plotPalette = {
  * An interactive figure. The plotting library (≈ 1.4 MB gzip) loads on first use, with a
  * visible progress note while it does, so pages without a plot stay small.
  */
-export function Plot(props: PlotParams & { label: string }) {
-  const { label, ...params } = props;
+export function Plot(props: PlotParams & { label: string; height: number }) {
+  const { label, height, ...params } = props;
   return (
-    <Suspense fallback={<Loading label={`Loading the plot: ${label}…`} />}>
-      <div role="figure" aria-label={label} data-testid="plot">
+    <Suspense fallback={<div style={{ minHeight: height }}><Loading label={`Loading the plot: ${label}…`} /></div>}>
+      <div role="figure" aria-label={label} data-testid="plot" style={{ width: '100%', height }}>
         <PlotlyFigure
           useResizeHandler
-          style={{ width: '100%', height: '100%' }}
+          style={{ width: '100%', height }}
           {...params}
           config={{ displaylogo: false, responsive: true, modeBarButtonsToRemove: ['select2d', 'lasso2d'], ...(params.config ?? {}) }}
         />

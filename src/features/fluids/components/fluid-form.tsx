@@ -27,7 +27,7 @@ export interface FluidFormProps {
   onSave: (input: FluidInput) => Promise<unknown>;
 }
 
-const cellClass = 'grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,15rem)_minmax(0,1fr)_6.5rem_8rem] sm:items-start';
+const cellClass = 'grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,19rem)_minmax(0,1fr)_6rem_9.5rem] sm:items-start';
 
 /**
  * Everything a fluid is made of: each property typed with its unit, its source, its ± % and the
@@ -108,7 +108,7 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
             <Select id={id} {...register(`${row.key}.distribution`)}>
               {distributionValues.map((value) => (
                 <option key={value} value={value}>
-                  {value === 'normal' ? 'Normal (± = 1σ)' : 'Uniform (± = half-width)'}
+                  {value === 'normal' ? 'Normal, ± = 1σ' : 'Uniform, ± = half'}
                 </option>
               ))}
             </Select>
@@ -215,7 +215,7 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
               {law === 'points' ? (
                 <div className="flex flex-col gap-2">
                   {points.fields.map((point, index) => (
-                    <div key={point.id} className="grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,12rem)_minmax(0,15rem)_auto] sm:items-start">
+                    <div key={point.id} className="grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,14rem)_minmax(0,19rem)_auto] sm:items-start">
                       <Controller
                         control={control}
                         name={`viscosity.points.${index}.temperature`}
@@ -297,14 +297,14 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
                   />
                 </div>
               )}
-              <div className="grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,1fr)_6.5rem_8rem]">
+              <div className="grid grid-cols-1 gap-3 sm:grid-cols-[minmax(0,1fr)_6rem_9.5rem]">
                 <TextField label="Source" error={errorAt('viscosity.source')} {...register('viscosity.source')} />
                 <TextField label="± %" type="number" inputMode="decimal" step="any" error={errorAt('viscosity.uncertaintyPercent')} {...register('viscosity.uncertaintyPercent', { valueAsNumber: true })} />
                 <Field label="Spread">
                   {({ id }) => (
                     <Select id={id} {...register('viscosity.distribution')}>
-                      <option value="normal">Normal (± = 1σ)</option>
-                      <option value="uniform">Uniform (± = half-width)</option>
+                      <option value="normal">Normal, ± = 1σ</option>
+                      <option value="uniform">Uniform, ± = half</option>
                     </Select>
                   )}
                 </Field>

@@ -103,15 +103,19 @@ export function QuietWindowFigure({ window: w, system, threshold }: { window: Qu
     },
   ];
 
+  // The map's own extent; boundary lines that leave it are clipped rather than stretching the axes.
+  const halfStep = drives.length > 1 ? (drives[1]! - drives[0]!) / 2 : 0;
+  const yRange = [drives[0]! - halfStep, drives[drives.length - 1]! + halfStep];
+  const xRange = [Math.log10(depths[0]!), Math.log10(depths[depths.length - 1]!)];
+
   const layout: Partial<Layout> = {
     autosize: true,
-    height: 440,
     margin: { l: 72, r: 24, t: 16, b: 64 },
     paper_bgcolor: plotPalette.paper,
     plot_bgcolor: plotPalette.paper,
     font: { family: plotPalette.font, color: plotPalette.ink, size: 13 },
-    xaxis: { title: { text: `Layer depth d [${depthUnit}]` }, type: 'log', gridcolor: plotPalette.grid, linecolor: plotPalette.inkSoft, range: [Math.log10(depths[0]!), Math.log10(depths[depths.length - 1]!)] },
-    yaxis: { title: { text: driveTitle }, gridcolor: plotPalette.grid, linecolor: plotPalette.inkSoft, range: [drives[0], drives[drives.length - 1]] },
+    xaxis: { title: { text: `Layer depth d [${depthUnit}]` }, type: 'log', range: xRange, gridcolor: plotPalette.grid, linecolor: plotPalette.inkSoft },
+    yaxis: { title: { text: driveTitle }, range: yRange, gridcolor: plotPalette.grid, linecolor: plotPalette.inkSoft, zeroline: false },
     legend: { orientation: 'h', x: 0, y: -0.2, bgcolor: 'rgba(255,255,255,0.85)' },
     hoverlabel: { font: { family: plotPalette.font } },
   };
@@ -150,8 +154,8 @@ export function QuietWindowFigure({ window: w, system, threshold }: { window: Qu
           </select>
         </label>
       </div>
-      <div className="min-h-[440px]">
-        <Plot label={`Quiet window: onset margin over layer depth and ${flux ? 'heat flux' : 'temperature difference'}`} data={data} layout={layout} />
+      <div>
+        <Plot height={460} label={`Quiet window: onset margin over layer depth and ${flux ? 'heat flux' : 'temperature difference'}`} data={data} layout={layout} />
       </div>
       <dl className="grid grid-cols-1 gap-2 text-[0.95rem] sm:grid-cols-3" data-testid="window-sizing">
         <div className="rounded-md bg-paper-sunk px-3 py-2">
