@@ -77,7 +77,7 @@ function FluidsPage() {
           </>
         }
       />
-      <div className={canWrite ? 'grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]' : ''}>
+      <div className="flex flex-col gap-8">
         <section aria-label="Fluid list" className="flex min-w-0 flex-col gap-4">
           <div className="no-print flex flex-wrap items-end gap-4">
             <div className="min-w-64 flex-1">
@@ -143,7 +143,7 @@ function FluidsPage() {
           )}
         </section>
         {canWrite && (
-          <aside className="no-print">
+          <aside className="no-print max-w-3xl">
             <FluidImport />
           </aside>
         )}

@@ -108,7 +108,7 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
             <Select id={id} {...register(`${row.key}.distribution`)}>
               {distributionValues.map((value) => (
                 <option key={value} value={value}>
-                  {value === 'normal' ? 'Normal, ± = 1σ' : 'Uniform, ± = half'}
+                  {value === 'normal' ? 'Normal (1σ)' : 'Uniform'}
                 </option>
               ))}
             </Select>
@@ -197,7 +197,7 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
           </h2>
           <p className="text-sm text-ink-soft">
             Type each value with its unit (“12 cP”, “35 dyn/cm”, “0.5 mil”, “68 °F”). The line under the box shows the value the server will store in SI and in
-            your units. The ± % feeds Property spread.
+            your units. The ± % feeds Property spread: one standard deviation for a normal spread, the half-width for a uniform one.
           </p>
           {propertyRows.slice(0, 5).map(propertyFieldset)}
 
@@ -303,8 +303,8 @@ export function FluidForm({ defaultValues, readOnly, submitLabel, busy, onSave }
                 <Field label="Spread">
                   {({ id }) => (
                     <Select id={id} {...register('viscosity.distribution')}>
-                      <option value="normal">Normal, ± = 1σ</option>
-                      <option value="uniform">Uniform, ± = half</option>
+                      <option value="normal">Normal (1σ)</option>
+                      <option value="uniform">Uniform</option>
                     </Select>
                   )}
                 </Field>
