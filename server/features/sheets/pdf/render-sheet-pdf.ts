@@ -95,7 +95,7 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
     lang: 'en',
     displayTitle: true,
   });
-  for (const [name, bytes] of fonts.files) doc.registerFont(name, bytes);
+  for (const [name, font] of fonts.files) doc.registerFont(name, font as unknown as Buffer);
 
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));

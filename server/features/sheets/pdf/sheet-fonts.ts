@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { inflateSync } from 'node:zlib';
+import { create as createFontkitFont, type FontkitFont } from 'fontkit';
 
 /**
  * Noto Sans for process sheets, from the shipped @fontsource/noto-sans files. pdfkit reads WOFF
@@ -19,8 +20,8 @@ const require = createRequire(import.meta.url);
 const packageDir = path.dirname(require.resolve('@fontsource/noto-sans/package.json'));
 
 export interface SheetFonts {
-  /** pdfkit font name → font bytes (the WOFF unpacked to OpenType) */
-  files: ReadonlyMap<string, Buffer>;
+  /** pdfkit font name → the font, parsed once from the WOFF unpacked to OpenType */
+  files: ReadonlyMap<string, FontkitFont>;
   /** Code-point ranges of each subset, inclusive. */
   ranges: ReadonlyMap<FontSubset, readonly (readonly [number, number])[]>;
 }
@@ -93,13 +94,13 @@ let cached: SheetFonts | undefined;
 export function loadSheetFonts(): SheetFonts {
   if (cached) return cached;
   const unicode = JSON.parse(readFileSync(path.join(packageDir, 'unicode.json'), 'utf8')) as Record<string, string>;
-  const files = new Map<string, Buffer>();
+  const files = new Map<string, FontkitFont>();
   const ranges = new Map<FontSubset, [number, number][]>();
   for (const subset of fontSubsets) {
     ranges.set(subset, parseRanges(unicode[subset]));
     for (const [weight, number] of [['regular', 400], ['bold', 700]] as const) {
       const woff = readFileSync(path.join(packageDir, 'files', `noto-sans-${subset}-${number}-normal.woff`));
-      files.set(fontName(subset, weight), woffToSfnt(woff));
+      files.set(fontName(subset, weight), createFontkitFont(woffToSfnt(woff)));
     }
   }
   cached = { files, ranges };
