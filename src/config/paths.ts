@@ -11,6 +11,9 @@ export const paths = {
   fluids: '/fluids',
   layerChecks: '/layer-checks',
   batch: '/batch',
+  dryingPath: '/drying-path',
+  propertySpread: '/property-spread',
+  meltPool: '/melt-pool',
 } as const;
 
 /** The sign-in URL that returns to `next` afterwards. */
