@@ -28,6 +28,9 @@ export const router = createBrowserRouter([
     children: [
       { index: true, element: <HomeRoute />, errorElement: <RouteError /> },
       { path: paths.adminUsers, lazy: () => import('./routes/admin/users') },
+      { path: paths.sheets, lazy: () => import('./routes/sheets') },
+      { path: `${paths.sheets}/:id`, lazy: () => import('./routes/sheets-detail') },
+      { path: paths.verify, lazy: () => import('./routes/verify') },
       { path: paths.adminOutbox, lazy: () => import('./routes/admin/outbox') },
       { path: paths.adminAudit, lazy: () => import('./routes/admin/audit') },
       { path: paths.fluids, lazy: () => import('./routes/fluids') },

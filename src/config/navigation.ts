@@ -22,6 +22,8 @@ export const navigation: readonly NavItem[] = [
   { label: 'Drying path', to: paths.dryingPath, roles: roleValues },
   { label: 'Property spread', to: paths.propertySpread, roles: roleValues },
   { label: 'Melt pool flow', to: paths.meltPool, roles: roleValues },
+  { label: 'Process sheets', to: paths.sheets, roles: roleValues },
+  { label: 'Verify a PDF', to: paths.verify, roles: roleValues },
   { label: 'Users', to: paths.adminUsers, roles: ['administrator'] },
   { label: 'Audit trail', to: paths.adminAudit, roles: ['administrator'] },
   { label: 'Outbox', to: paths.adminOutbox, roles: ['administrator'] },

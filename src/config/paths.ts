@@ -14,6 +14,8 @@ export const paths = {
   dryingPath: '/drying-path',
   propertySpread: '/property-spread',
   meltPool: '/melt-pool',
+  sheets: '/sheets',
+  verify: '/verify',
 } as const;
 
 /** The sign-in URL that returns to `next` afterwards. */
