@@ -28,6 +28,7 @@ import { registerDryingPathsRoutes } from './features/drying-paths/drying-paths.
 import { registerPropertySpreadsRoutes } from './features/property-spreads/property-spreads.routes';
 import { registerMeltPoolRoutes } from './features/melt-pool/melt-pool.routes';
 import { registerBatchRoutes } from './features/batch/batch.routes';
+import { registerGaugeLogRoutes } from './features/gauge-log/gauge-log.routes';
 
 /** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
 export const JSON_BODY_LIMIT = '1mb';
@@ -96,6 +97,7 @@ export function createApp(input: CreateAppDeps): Express {
   registerPropertySpreadsRoutes(api);
   registerMeltPoolRoutes(api);
   registerBatchRoutes(api);
+  registerGaugeLogRoutes(api);
   app.use(api.router);
   app.use('/api', apiNotFound);
 

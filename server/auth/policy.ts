@@ -63,6 +63,16 @@ export const policy = {
   'sheets.return': ['reviewer'],
   'sheets.sign': ['reviewer'],
   'sheets.verify': SIGNED_IN,
+  // Gauge log (issue 6): technicians and engineers upload readings; engineers issue device tokens and
+  // disposition nonconformance notes they own; QA reviewers close notes with a signature.
+  // 'gauge.device-post' is PUBLIC because POST /api/gauge/readings authenticates by its own bearer
+  // token (gauge_tokens, SHA-256, scoped to one sheet and line): it never reads a session cookie.
+  'gauge.read': SIGNED_IN,
+  'gauge.upload': ['technician', 'engineer'],
+  'gauge.tokens': ['engineer'],
+  'gauge.device-post': PUBLIC,
+  'gauge.notes.disposition': ['engineer'],
+  'gauge.notes.close': ['reviewer'],
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policy;

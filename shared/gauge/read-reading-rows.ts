@@ -114,6 +114,20 @@ export function detectReadingMapping(headers: readonly string[]): ReadingColumnM
       used.add(header);
     }
   }
+  // A header that names no field but carries a film-thickness unit (µm, mil, mm) is the thickness.
+  if (columns.thickness === undefined) {
+    const header = headers.find((h) => {
+      const unit = unitFromHeader(h);
+      if (used.has(h) || unit === null || unit.trim() === 'm') return false;
+      try {
+        resolveUnit(unit, 'length');
+        return true;
+      } catch {
+        return false;
+      }
+    });
+    if (header !== undefined) columns.thickness = header;
+  }
   const units: Partial<Record<ReadingUnitField, string>> = {};
   for (const field of Object.keys(readingUnitKinds) as ReadingUnitField[]) {
     const header = columns[field];
