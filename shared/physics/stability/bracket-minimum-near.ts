@@ -3,8 +3,10 @@ export type LogPoint = readonly [number, number];
 
 /** Half-width in ln k of the first bracket around the hint (k ± 1.5 %). */
 const HALF_WIDTH = 0.015;
-/** Doubling steps allowed when the minimum lies outside the first bracket (reach ≈ 1.9 in ln k). */
-const EXPANSIONS = 6;
+/** Steps allowed when the minimum lies outside the first bracket (reach ≈ 4.2 in ln k). */
+const EXPANSIONS = 12;
+/** Longest step in ln k (the ratio 1.6 of the coarse walk in minimiseMarginalFactor). */
+const LONGEST_STEP = Math.log(1.6);
 
 /**
  * Bracket the minimum of λ(k) close to an expected wavenumber.
@@ -12,7 +14,7 @@ const EXPANSIONS = 6;
  * ## Method
  * Evaluates λ at ln k = ln hint and ln hint ± 0.015. If the middle is lowest, these three points
  * are the bracket. Otherwise it steps on downhill from the lower end with doubling steps (0.03,
- * 0.06, … in ln k, six at most) until λ rises again; the last three points then bracket a
+ * 0.06, … in ln k, at most ln 1.6 as in the coarse walk; twelve steps at most) until λ rises again; the last three points then bracket a
  * minimum (golden-section style bracketing, Press et al. §10.1). Gives up (returns null) when a
  * value is infinite (no stationary mode there: the coarse scan handles branch ends), when a step
  * would leave [smallest, largest] (the k → 0 limit may be the minimum), or when λ still falls
@@ -48,7 +50,7 @@ export function bracketMinimumNear(
   let end = direction < 0 ? low : high;
   let step = HALF_WIDTH;
   for (let i = 0; i < EXPANSIONS; i++) {
-    step *= 2;
+    step = Math.min(2 * step, LONGEST_STEP);
     const s = end[0] + direction * step;
     const k = Math.exp(s);
     if (k < smallest || k > largest) return null;

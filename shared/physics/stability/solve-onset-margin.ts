@@ -64,8 +64,11 @@ export function solveOnsetMargin(
     longWaveMargin = longWaveLimit(evaluate, checked.bond);
     // The cellular minimum of the deformable problem lies near the flat one: bracket it there
     // (widening downhill, and the full scan if that fails).
-    const near = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? cell.wavenumber * (hints.deformableRatio ?? 1) : undefined;
-    const deformable = criticalFactor(checked, evaluate, { limitAtZero: longWaveMargin, wavenumberHint: near });
+    // (With opposite drives, where a bracket is not used, the coarse scan is centred there instead.)
+    const flatMinimum = cell.wavenumber > 0 && Number.isFinite(cell.factor) ? cell.wavenumber : undefined;
+    const near = flatMinimum === undefined ? undefined : flatMinimum * (hints.deformableRatio ?? 1);
+    const scan = flatMinimum === undefined ? undefined : [flatMinimum / 1.25, flatMinimum, flatMinimum * 1.25];
+    const deformable = criticalFactor(checked, evaluate, { limitAtZero: longWaveMargin, wavenumberHint: near, scan });
     deformableCellWavenumber = Number.isFinite(deformable.factor) ? deformable.wavenumber : NaN;
     modeProblem = checked;
     if (longWaveMargin <= deformable.factor && Number.isFinite(longWaveMargin)) {

@@ -77,7 +77,8 @@ export interface OnsetMarginOptions {
    * Expected critical wavenumber of the flat cellular mode [1/d], finite and > 0: for example the
    * cellWavenumber of a neighbouring depth in a sweep. The search brackets the minimum around it
    * first and falls back to the full coarse scan when that bracket fails; it changes the cost,
-   * not the answer. Omit for a cold search.
+   * not the answer. Ignored when Ra and Ma have opposite signs (the neutral curve can then have
+   * two cellular minima and only the full scan compares them). Omit for a cold search.
    */
   wavenumberHint?: number;
 }
