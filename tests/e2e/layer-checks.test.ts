@@ -15,11 +15,13 @@
  * - Hexagon centre spacing for a hexagonal planform of wavenumber k: 4π d / (√3 k_c)
  *   (Chandrasekhar S. (1961) Hydrodynamic and Hydromagnetic Stability, §II.16, hexagonal cells).
  */
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, screenshotDir, signIn } from './support/browser';
 import { startTestApp, type TestApp } from './support/app-server';
+import { projectRoot } from '../../scripts/lib/project-root';
 
 const E2E_TIMEOUT = 240_000;
 const CHART_WAIT = 45_000;
@@ -191,6 +193,98 @@ describe('fluid library and layer check in the browser', () => {
       await page.goto('/layer-checks');
       await page.getByRole('table').waitFor();
       expect(await page.getByRole('link', { name: 'New layer check' }).count()).toBe(0);
+    } finally {
+      await context.close();
+    }
+  }, E2E_TIMEOUT);
+
+  it('a stale save is refused: the second engineer is told someone saved a newer revision and can reload it', async () => {
+    expect(checkUrl).toMatch(/^\/layer-checks\//);
+    const first = await newPage(browser, app.url);
+    const second = await newPage(browser, app.url);
+    try {
+      for (const { page } of [first, second]) {
+        await signIn(page, 'engineer@larkspur.example');
+        await page.goto(checkUrl);
+        await page.getByTestId('check-meta').waitFor();
+      }
+      // Both hold revision 1. The first saves a thinner coat: revision 2.
+      await first.page.getByLabel('Layer depth (wet thickness)').fill('1.5 mil');
+      await first.page.getByTestId('save-check').click();
+      await first.page.getByText('Revision 2 is stored.').waitFor();
+      expect(await first.page.getByTestId('check-meta').innerText()).toContain('revision 2');
+
+      // The second, still on revision 1, saves a new title and is refused.
+      await second.page.getByLabel('Title', { exact: true }).fill('Line 2 primer, renamed on a stale page');
+      await second.page.getByTestId('save-check').click();
+      await second.page.getByTestId('conflict').waitFor();
+      expect(await second.page.getByTestId('conflict').innerText()).toContain('revision 2');
+      // Until reloaded, the page still says which revision the person is editing.
+      expect(await second.page.getByTestId('check-meta').innerText()).toContain('revision 1');
+      await second.page.getByRole('button', { name: 'Reload the newer version' }).click();
+      await expect.poll(() => second.page.getByTestId('check-meta').innerText()).toContain('revision 2');
+      expect(await second.page.getByLabel('Layer depth (wet thickness)').inputValue()).toBe('1.5 mil');
+      expect(await second.page.getByLabel('Title', { exact: true }).inputValue()).toBe('Line 2 primer, hot first zone (test)');
+      expect(await second.page.getByTestId('conflict').count()).toBe(0);
+    } finally {
+      await first.context.close();
+      await second.context.close();
+    }
+  }, E2E_TIMEOUT);
+
+  it('a CSV import shows line-numbered problems first and saves nothing until the file is clean', async () => {
+    const { context, page } = await newPage(browser, app.url);
+    try {
+      await signIn(page, 'engineer@larkspur.example');
+      await page.goto('/fluids');
+      await page.getByRole('table').waitFor();
+      // Start from the export, as the page suggests: its header is the import format.
+      const exported = await page.evaluate(async () => (await fetch('/api/fluids/export.csv')).text());
+      const header = exported.split(/\r?\n/)[0]!;
+      const columns = header.split(',');
+      const row = (name: string, density: string) => {
+        const cells: Record<string, string> = {
+          name, kind: 'solvent', reference_temperature: '20 °C', density, density_uncertainty_pct: '1', density_distribution: 'normal',
+          expansion: '0.001 1/K', surface_tension: '28 dyn/cm', surface_tension_slope: '-0.1 mN/(m·K)', conductivity: '0.13 W/(m·K)',
+          heat_capacity: '1.7 kJ/(kg·K)', viscosity_points: '20 °C = 0.6 cP',
+        };
+        return columns.map((column) => cells[column] ?? '').join(',');
+      };
+      const upload = (lines: string[]) =>
+        page.getByTestId('fluid-csv-file').setInputFiles({ name: 'fluids.csv', mimeType: 'text/csv', buffer: Buffer.from([header, ...lines].join('\n')) });
+
+      await upload([row('Imported solvent A', '0.86 g/cm³'), row('Imported solvent B', '-5 kg/m³')]);
+      await page.getByTestId('fluid-csv-errors').waitFor();
+      expect(await page.getByTestId('fluid-csv-errors').innerText()).toMatch(/Line 3\b/);
+      expect(await page.getByRole('button', { name: /^Import \d+ fluids?$/ }).count()).toBe(0);
+
+      await upload([row('Imported solvent A', '0.86 g/cm³'), row('Imported solvent B', '860 kg/m³')]);
+      await page.getByRole('button', { name: 'Import 2 fluids' }).click();
+      await page.getByText('2 fluids were added to the library.').waitFor();
+      await page.goto('/fluids?q=Imported');
+      await expect.poll(() => page.getByRole('link', { name: /Imported solvent/ }).count()).toBe(2);
+    } finally {
+      await context.close();
+    }
+  }, E2E_TIMEOUT);
+
+  it('the batch page evaluates the onset command’s CSV fixture and flags rows with errors', async () => {
+    const { context, page } = await newPage(browser, app.url);
+    try {
+      await signIn(page, 'engineer@larkspur.example');
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Batch' }).click();
+      const csv = readFileSync(join(projectRoot, 'tests', 'fixtures', 'onset', 'cases.csv'), 'utf8');
+      const broken = `${csv.trimEnd()}\nbad-row,rigid,conducting,lid,1000,,,,,,,,,,,,,\n`;
+      await page.getByTestId('batch-file').setInputFiles({ name: 'cases.csv', mimeType: 'text/csv', buffer: Buffer.from(broken) });
+      await page.getByTestId('batch-run').click();
+      const results = page.getByTestId('batch-results');
+      await results.waitFor({ timeout: 30_000 });
+      const text = await results.innerText();
+      // Pearson (1958): Ma = 39.8035 on a Bi = 0 rigid conducting bottom is half the critical 79.607 → margin 2.
+      expect(text).toContain('6 cases · 2 with errors');
+      const rowText = async (id: string) => (await results.getByRole('row', { name: new RegExp(`^${id}\\b`) }).innerText()).replace(/\s+/g, ' ');
+      expect(await rowText('pearson-half')).toMatch(/Quiet 2(\.0+)?× /);
+      expect(await rowText('bad-row')).toMatch(/Error ✕ top: .*"lid"/);
     } finally {
       await context.close();
     }

@@ -71,7 +71,10 @@ interface EditorProps {
 }
 
 /** The screen an engineer lives in: inputs on the left, the live verdict on the right, the quiet window below. */
-function LayerCheckEditor({ check, fluids, canWrite, roleLabel, initialFluidId, onReload }: EditorProps) {
+function LayerCheckEditor({ check: loaded, fluids, canWrite, roleLabel, initialFluidId, onReload }: EditorProps) {
+  // The revision this editor was opened on (or last saved): its version goes with the next save, so a
+  // newer revision fetched meanwhile (e.g. to describe a conflict) never turns a stale edit into an overwrite.
+  const [check, setCheck] = useState(loaded);
   const navigate = useNavigate();
   const client = useQueryClient();
   const [system] = useUnitSystem();
@@ -110,6 +113,7 @@ function LayerCheckEditor({ check, fluids, canWrite, roleLabel, initialFluidId, 
       }
       const saved = await update.mutateAsync({ id: check.id, input, version: check.version });
       setSavedRevision(saved.revision);
+      setCheck(saved);
       client.setQueryData(layerCheckQueryOptions(check.id).queryKey, saved);
       form.reset(layerCheckToValues(saved));
     } catch (error) {

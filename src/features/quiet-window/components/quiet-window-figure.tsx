@@ -105,8 +105,8 @@ export function QuietWindowFigure({ window: w, system, threshold }: { window: Qu
 
   // The map's own extent; boundary lines that leave it are clipped rather than stretching the axes.
   const halfStep = drives.length > 1 ? (drives[1]! - drives[0]!) / 2 : 0;
-  const yRange = [drives[0]! - halfStep, drives[drives.length - 1]! + halfStep];
-  const xRange = [Math.log10(depths[0]!), Math.log10(depths[depths.length - 1]!)];
+  const yRange: [number, number] = [drives[0]! - halfStep, drives[drives.length - 1]! + halfStep];
+  const xRange: [number, number] = [Math.log10(depths[0]!), Math.log10(depths[depths.length - 1]!)];
 
   const layout: Partial<Layout> = {
     autosize: true,
