@@ -3,6 +3,9 @@ import type { Database } from '../db/client';
 import type { Logger } from '../logger';
 import { findUnfinishedSpreadIds } from '../features/property-spreads/property-spreads.repository';
 import { runQueuedSpread, SpreadInterruptedError } from '../features/property-spreads/run-queued-spread';
+import type { OpenSpreadCompute } from './spread-compute';
+import { openInlineSpreadCompute } from './spread-compute-inline';
+import { openThreadSpreadCompute } from './spread-compute-thread';
 import type { SpreadQueue } from './spread-queue-registry';
 
 /** The pg-boss queue that runs large Property spreads. */
@@ -41,6 +44,18 @@ export async function startJobs(options: { databaseUrl: string; db: Database; lo
     }
   }
 
+  // Samples are computed in a worker thread so the web server in this process keeps answering;
+  // if a thread cannot start (an unusual runtime), the run falls back to this thread.
+  const openCompute: OpenSpreadCompute = async (plan, layer) => {
+    try {
+      return await openThreadSpreadCompute(plan, layer);
+    } catch (error) {
+      if (error instanceof RangeError) throw error;
+      logger.warn({ err: error }, 'spread worker thread could not start; sampling in the main thread');
+      return openInlineSpreadCompute(plan, layer);
+    }
+  };
+
   let stopping = false;
   const enqueue = async (spreadId: string) => {
     await boss.send(SPREAD_QUEUE, { spreadId }, { ...QUEUE_OPTIONS });
@@ -49,7 +64,7 @@ export async function startJobs(options: { databaseUrl: string; db: Database; lo
   await boss.work<{ spreadId: string }>(SPREAD_QUEUE, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
     const { spreadId } = job.data;
     try {
-      const outcome = await runQueuedSpread(db, spreadId, { shouldStop: () => stopping, pauseBetweenChunksMs: options.chunkPauseMs });
+      const outcome = await runQueuedSpread(db, spreadId, { shouldStop: () => stopping, pauseBetweenChunksMs: options.chunkPauseMs, openCompute });
       logger.info({ spreadId, outcome }, 'property spread job finished');
     } catch (error) {
       if (error instanceof SpreadInterruptedError) logger.info({ spreadId }, error.message);

@@ -14,6 +14,16 @@ export function withPhysicsFieldErrors<T>(run: () => T, prefix = ''): T {
   }
 }
 
+/** {@link withPhysicsFieldErrors} for an async call. */
+export async function withPhysicsFieldErrorsAsync<T>(run: () => Promise<T>, prefix = ''): Promise<T> {
+  try {
+    return await run();
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    throw new UnprocessableError(`Some values are not right: ${error.message}`, { [fieldOf(error.message, prefix)]: error.message });
+  }
+}
+
 /** The dotted field path a physics message starts with, or '_' when it names none. */
 export function fieldOf(message: string, prefix = ''): string {
   const match = /^([A-Za-z_][\w]*(?:\[\d+\]|\.[A-Za-z_]\w*)*)\s/.exec(message);

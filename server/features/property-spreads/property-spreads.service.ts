@@ -1,10 +1,6 @@
 import { readLayerInput } from '../../../shared/fluids/read-layer-input';
-import { createLayerSpreadEvaluator } from '../../../shared/physics/spread/create-layer-spread-evaluator';
 import { createLayerSpreadPlan } from '../../../shared/physics/spread/create-layer-spread-plan';
-import { marginSwingPerProperty } from '../../../shared/physics/spread/margin-swing-per-property';
-import { runSpreadChunk } from '../../../shared/physics/spread/run-spread-chunk';
-import type { SpreadChunk, SpreadPlan, SpreadPropertySpec } from '../../../shared/physics/spread/spread-types';
-import { summarizeSpread } from '../../../shared/physics/spread/summarize-spread';
+import type { SpreadPropertySpec } from '../../../shared/physics/spread/spread-types';
 import type { PhysicalLayer } from '../../../shared/physics/sizing/types';
 import {
   INLINE_SPREAD_LIMIT,
@@ -19,10 +15,32 @@ import type { Database, DbOrTx } from '../../db/client';
 import { NotFoundError, UnprocessableError } from '../../errors';
 import { recordAuditEvent } from '../audit/record-audit-event';
 import { findCheckAtRevision } from '../drying-paths/check-revision';
-import { withPhysicsFieldErrors } from '../drying-paths/physics-range-error';
+import { withPhysicsFieldErrors, withPhysicsFieldErrorsAsync } from '../drying-paths/physics-range-error';
 import { findFluidForSpread, findSpreadById, findSpreadsOfCheck, insertSpread, type PropertySpreadRow } from './property-spreads.repository';
 import { spreadChunkSize } from './spread-chunk-size';
 import { uncertaintiesFromFluid } from './spread-uncertainties';
+import type { OpenSpreadCompute, SpreadCompute } from '../../jobs/spread-compute';
+import { openInlineSpreadCompute } from '../../jobs/spread-compute-inline';
+import { openThreadSpreadCompute } from '../../jobs/spread-compute-thread';
+
+export { spreadRunResult } from './spread-run-result';
+
+/** Inline runs above this many samples move to a worker thread when every sample needs the full solver. */
+const SOLVER_INLINE_SAMPLES = 500;
+
+/**
+ * The compute for an inline run: this thread with the validated response surface (fast), or a
+ * worker thread when the full solver is needed for many samples, so the request does not hold up others.
+ */
+async function openInlineRunCompute(plan: Parameters<OpenSpreadCompute>[0], layer: PhysicalLayer): Promise<SpreadCompute> {
+  const here = openInlineSpreadCompute(plan, layer);
+  if (here.evaluator.method === 'surrogate' || plan.samples <= SOLVER_INLINE_SAMPLES) return here;
+  try {
+    return await openThreadSpreadCompute(plan, layer);
+  } catch {
+    return here;
+  }
+}
 
 /** Sends a queued spread to the job queue (absent when the queue is not running: a worker started later picks it up). */
 export type EnqueueSpread = (spreadId: string) => Promise<void>;
@@ -30,19 +48,6 @@ export type EnqueueSpread = (spreadId: string) => Promise<void>;
 /** Physics specs from the API's ± percent uncertainties. */
 export function toSpreadSpecs(uncertainties: readonly SpreadUncertainty[]): SpreadPropertySpec[] {
   return uncertainties.map((u) => ({ name: u.name, relativeUncertainty: u.uncertaintyPercent / 100, distribution: u.distribution }));
-}
-
-/**
- * The finished figures of a run: summary of the merged tallies, the one-at-a-time swings and the
- * evaluator used. Pure apart from the evaluator it is given.
- */
-export function spreadRunResult(plan: SpreadPlan, chunk: SpreadChunk, chosen: ReturnType<typeof createLayerSpreadEvaluator>): SpreadRunResult {
-  return {
-    ...summarizeSpread(plan, chunk),
-    swing: marginSwingPerProperty(plan.base, plan.properties, chosen.evaluate),
-    method: chosen.method,
-    fallbackReason: chosen.fallbackReason,
-  };
 }
 
 /** JSON as stored: infinite numbers become null, as in the API answer. */
@@ -89,7 +94,7 @@ export async function startPropertySpread(
   user: CurrentUser,
   checkId: string,
   body: z.output<typeof runSpreadInputSchema>,
-  options: { enqueue?: EnqueueSpread; requestId?: string } = {},
+  options: { enqueue?: EnqueueSpread; requestId?: string; openCompute?: OpenSpreadCompute } = {},
 ): Promise<PropertySpread> {
   const { check, fluid, layer } = await layerOfCheck(db, checkId);
   let uncertainties = body.uncertainties;
@@ -107,13 +112,17 @@ export async function startPropertySpread(
   let result: SpreadRunResult | null = null;
   let evaluator: unknown = null;
   if (inline) {
-    const chosen = withPhysicsFieldErrors(() => createLayerSpreadEvaluator(layer, plan.properties, { seed: plan.seed }));
-    const chunk = runSpreadChunk(plan, { start: 0, count: plan.samples }, chosen.evaluate);
-    if (chunk.validCount === 0) {
-      throw new UnprocessableError('No sample of this spread could be judged: every sample left the range the solver accepts.', { uncertainties: 'every sample was refused by the solver; lower the uncertainties' });
+    const compute = await withPhysicsFieldErrorsAsync(() => (options.openCompute ?? openInlineRunCompute)(plan, layer));
+    try {
+      const chunk = await compute.runChunk(0, plan.samples);
+      if (chunk.validCount === 0) {
+        throw new UnprocessableError('No sample of this spread could be judged: every sample left the range the solver accepts.', { uncertainties: 'every sample was refused by the solver; lower the uncertainties' });
+      }
+      result = await compute.result(chunk);
+      evaluator = compute.evaluator;
+    } finally {
+      await compute.close();
     }
-    result = jsonSafe(spreadRunResult(plan, chunk, chosen));
-    evaluator = jsonSafe({ method: chosen.method, surrogate: chosen.surrogate, fallbackReason: chosen.fallbackReason });
   }
 
   const row = await db.transaction(async (tx) => {
@@ -129,7 +138,7 @@ export async function startPropertySpread(
       plan: jsonSafe(plan),
       evaluator,
       evaluatedSamples: inline ? plan.samples : 0,
-      result,
+      result: result ? jsonSafe(result) : null,
       finishedAt: inline ? new Date() : null,
       createdBy: user.id,
     });

@@ -1,12 +1,11 @@
 import { setImmediate as yieldToEventLoop } from 'node:timers/promises';
-import { createLayerSpreadEvaluator } from '../../../shared/physics/spread/create-layer-spread-evaluator';
 import { mergeSpreadChunks } from '../../../shared/physics/spread/merge-spread-chunks';
-import { runSpreadChunk } from '../../../shared/physics/spread/run-spread-chunk';
 import type { SpreadChunk, SpreadPlan } from '../../../shared/physics/spread/spread-types';
 import type { PhysicalLayer } from '../../../shared/physics/sizing/types';
 import type { Database } from '../../db/client';
 import { advanceProgress, findChunkRanges, findChunks, findSpreadById, insertChunk, updateSpread } from './property-spreads.repository';
-import { spreadRunResult } from './property-spreads.service';
+import type { OpenSpreadCompute, SpreadCompute } from '../../jobs/spread-compute';
+import { openInlineSpreadCompute } from '../../jobs/spread-compute-inline';
 
 /** Thrown between chunks when the worker is asked to stop; the job queue retries the job later. */
 export class SpreadInterruptedError extends Error {
@@ -23,6 +22,8 @@ export interface RunQueuedSpreadOptions {
   pauseBetweenChunksMs?: number;
   /** Called after each stored chunk with samples evaluated so far. */
   onProgress?: (evaluated: number, samples: number) => void;
+  /** Where samples are computed (default: this thread; the job worker uses a worker thread). */
+  openCompute?: OpenSpreadCompute;
 }
 
 /** End of the contiguous run of stored chunks from sample 0. */
@@ -50,38 +51,43 @@ export async function runQueuedSpread(db: Database, spreadId: string, options: R
   const plan = row.plan as SpreadPlan;
   const layer = row.layer as PhysicalLayer;
 
-  let chosen: ReturnType<typeof createLayerSpreadEvaluator>;
+  let compute: SpreadCompute;
   try {
-    chosen = createLayerSpreadEvaluator(layer, plan.properties, { seed: plan.seed });
+    compute = await (options.openCompute ?? (async (p, l) => openInlineSpreadCompute(p, l)))(plan, layer);
   } catch (error) {
     // A plan the physics refuses will not heal by retrying: fail the spread, not the job.
-    await updateSpread(db, spreadId, { status: 'failed', error: (error as Error).message, finishedAt: new Date() });
+    if (!(error instanceof RangeError)) throw error;
+    await updateSpread(db, spreadId, { status: 'failed', error: error.message, finishedAt: new Date() });
     return 'failed';
   }
-  await updateSpread(db, spreadId, { status: 'running', evaluator: JSON.parse(JSON.stringify({ method: chosen.method, surrogate: chosen.surrogate, fallbackReason: chosen.fallbackReason })) });
+  try {
+    await updateSpread(db, spreadId, { status: 'running', evaluator: compute.evaluator });
 
-  let next = resumePoint(await findChunkRanges(db, spreadId));
-  while (next < plan.samples) {
-    if (options.shouldStop?.()) throw new SpreadInterruptedError(spreadId, next);
-    const count = Math.min(row.chunkSize, plan.samples - next);
-    const chunk = runSpreadChunk(plan, { start: next, count }, chosen.evaluate);
-    await db.transaction(async (tx) => {
-      await insertChunk(tx, spreadId, next, next + count, chunk);
-      await advanceProgress(tx, spreadId, next + count);
-    });
-    next += count;
-    options.onProgress?.(next, plan.samples);
-    if (options.pauseBetweenChunksMs) await new Promise((resolve) => setTimeout(resolve, options.pauseBetweenChunksMs));
-    else await yieldToEventLoop();
-  }
+    let next = resumePoint(await findChunkRanges(db, spreadId));
+    while (next < plan.samples) {
+      if (options.shouldStop?.()) throw new SpreadInterruptedError(spreadId, next);
+      const count = Math.min(row.chunkSize, plan.samples - next);
+      const chunk = await compute.runChunk(next, count);
+      await db.transaction(async (tx) => {
+        await insertChunk(tx, spreadId, next, next + count, chunk);
+        await advanceProgress(tx, spreadId, next + count);
+      });
+      next += count;
+      options.onProgress?.(next, plan.samples);
+      if (options.pauseBetweenChunksMs) await new Promise((resolve) => setTimeout(resolve, options.pauseBetweenChunksMs));
+      else await yieldToEventLoop();
+    }
 
-  const chunks = (await findChunks(db, spreadId)) as SpreadChunk[];
-  const merged = mergeSpreadChunks(plan, chunks);
-  if (merged.validCount === 0) {
-    await updateSpread(db, spreadId, { status: 'failed', error: 'No sample could be judged: every sample left the range the solver accepts.', evaluatedSamples: plan.samples, finishedAt: new Date() });
-    return 'failed';
+    const chunks = (await findChunks(db, spreadId)) as SpreadChunk[];
+    const merged = mergeSpreadChunks(plan, chunks);
+    if (merged.validCount === 0) {
+      await updateSpread(db, spreadId, { status: 'failed', error: 'No sample could be judged: every sample left the range the solver accepts.', evaluatedSamples: plan.samples, finishedAt: new Date() });
+      return 'failed';
+    }
+    const result = await compute.result(merged);
+    await updateSpread(db, spreadId, { status: 'done', result, evaluatedSamples: plan.samples, finishedAt: new Date(), error: null });
+  } finally {
+    await compute.close();
   }
-  const result = JSON.parse(JSON.stringify(spreadRunResult(plan, merged, chosen)));
-  await updateSpread(db, spreadId, { status: 'done', result, evaluatedSamples: plan.samples, finishedAt: new Date(), error: null });
   return 'done';
 }
