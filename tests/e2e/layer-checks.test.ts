@@ -19,6 +19,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { wcagViolations } from './support/accessibility';
 import { launchBrowser, newPage, screenshot, screenshotDir, signIn } from './support/browser';
 import { startTestApp, type TestApp } from './support/app-server';
 import { projectRoot } from '../../scripts/lib/project-root';
@@ -76,6 +77,18 @@ function leadingNumber(text: string): number {
   return Number(match[0].replace(/,/g, ''));
 }
 
+/**
+ * A full-page screenshot taken at a viewport as tall as the page, so the capture itself does not
+ * resize the window (a resize makes the plot lay itself out again mid-capture).
+ */
+async function screenshotWholePage(page: Page, name: string): Promise<void> {
+  const width = page.viewportSize()?.width ?? 1280;
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  await page.setViewportSize({ width, height });
+  await page.waitForTimeout(1500);
+  await screenshot(page, name);
+}
+
 async function fillProperty(page: Page, key: string, value: string, source: string, uncertainty: string) {
   const box = page.getByTestId(`property-${key}`);
   await box.getByLabel('Value with unit').fill(value);
@@ -129,7 +142,9 @@ describe('fluid library and layer check in the browser', () => {
       expect(await page.getByRole('row', { name: new RegExp(fluidName) }).innerText()).toContain('12.00 cP');
       await page.goto('/fluids');
       await page.getByRole('link', { name: fluidName }).waitFor();
-      await screenshot(page, 'fluids');
+      await screenshotWholePage(page, 'fluids');
+      expect(await wcagViolations(page)).toEqual([]);
+      await page.setViewportSize({ width: 1360, height: 900 });
       await page.getByTestId('unit-system').selectOption('floor');
 
       // Act: a drying-coat check on this fluid, 2 mil wet, 90 °F across the layer, flat insulating top.
@@ -169,8 +184,8 @@ describe('fluid library and layer check in the browser', () => {
       checkUrl = new URL(page.url()).pathname;
       await page.getByTestId('quiet-window').locator('.main-svg').first().waitFor({ timeout: CHART_WAIT });
       await page.getByTestId('margin-value').waitFor();
-      await page.waitForTimeout(500);
-      await screenshot(page, 'layer-check');
+      await screenshotWholePage(page, 'layer-check');
+      expect(await wcagViolations(page)).toEqual([]);
       await page.getByTestId('quiet-window').screenshot({ path: join(screenshotDir, 'quiet-window.png') });
     } finally {
       await context.close();
@@ -189,6 +204,7 @@ describe('fluid library and layer check in the browser', () => {
       expect(await page.getByLabel('Title', { exact: true }).isEditable()).toBe(false);
       expect(await page.getByLabel('Layer depth (wet thickness)').isEditable()).toBe(false);
       expect(await page.getByText('only a Process engineer changes it').count()).toBe(1);
+      expect(await wcagViolations(page)).toEqual([]);
       // No way to a new check either.
       await page.goto('/layer-checks');
       await page.getByRole('table').waitFor();
