@@ -52,30 +52,38 @@ export const snapshotPropertySchema = z.object({
 });
 export type SnapshotProperty = z.infer<typeof snapshotPropertySchema>;
 
-/** Per oven zone: where the drying path stands at the end of the zone (SI). Optional on a sheet. */
+/**
+ * The Drying path saved with the check revision, as summarised for the sheet (SI). Optional: only
+ * when an engineer saved a drying set-up for that revision.
+ */
 export const dryingPathSummarySchema = z.object({
-  summary: z.string(),
+  title: z.string(),
+  verdictText: z.string(),
+  /** Smallest thermal and solutal onset margins along the path; null = no onset possible. */
+  minThermalMargin: z.number().nullable(),
+  minSolutalMargin: z.number().nullable(),
   zones: z.array(
     z.object({
       zone: z.string(),
       /** [s] */ residenceTime: z.number(),
       /** [m] wet film thickness at zone exit */ thicknessOut: z.number(),
       /** [-] solids mass fraction at zone exit */ solidsOut: z.number(),
-      /** smallest onset margin in the zone; null = no onset possible */ minMargin: z.number().nullable(),
-      /** [kg/s] solvent evaporated in the zone; null when not computed */ solventLoad: z.number().nullable(),
+      /** [K] */ maxFilmTemperature: z.number(),
+      /** [L/min] solvent evaporated in the zone, as liquid; null when not computed */ solventLitresPerMinute: z.number().nullable(),
+      /** [-] share of the lower flammable limit in the exhaust; null when not computed */ lflFraction: z.number().nullable(),
     }),
   ),
 });
 export type DryingPathSummary = z.infer<typeof dryingPathSummarySchema>;
 
-/** Monte Carlo over the property uncertainties. Optional on a sheet. */
+/** The newest finished Property spread of the check revision, summarised. Optional. */
 export const propertySpreadSummarySchema = z.object({
   samples: z.number().int(),
   probabilityOfOnset: z.number(),
   marginP05: z.number().nullable(),
   marginP50: z.number().nullable(),
   marginP95: z.number().nullable(),
-  /** Properties that move the margin most, largest first. */
+  /** Properties that move the margin most (margin swing over ± their uncertainty), largest first. */
   drivers: z.array(z.object({ property: z.string(), swing: z.number() })),
 });
 export type PropertySpreadSummary = z.infer<typeof propertySpreadSummarySchema>;

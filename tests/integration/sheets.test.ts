@@ -7,7 +7,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditEvents, outboxMessages, users } from '../../server/db/schema';
+import { auditEvents, dryingSetups, outboxMessages, propertySpreads, users } from '../../server/db/schema';
 import { SOLVER_VERSION } from '../../shared/physics/version';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent, type TestUser } from './helpers/users';
@@ -554,5 +554,62 @@ describe('audit trail of a sheet', () => {
       'sheet.submitted': people.author.email,
       'sheet.returned': people.reviewer.email,
     });
+  });
+});
+
+describe('drying path and property spread on the sheet', () => {
+  it('carries the saved drying set-up and the newest finished property spread of the check revision into the snapshot and the PDF', async () => {
+    const own = await agents.author.post('/api/layer-checks').send({ ...quietCheck(fluidId), title: 'Check with drying and spread', processKind: 'drying-coat' });
+    expect(own.status).toBe(201);
+    // Stored results as the drying-path and property-spread features save them (values made up for this test).
+    await ctx.db.insert(dryingSetups).values({
+      checkId: own.body.id,
+      revision: 1,
+      title: 'Oven at 3 m/min',
+      input: {},
+      resultSummary: {
+        verdict: 'quiet',
+        verdictText: 'No cells form along the path.',
+        minThermalMargin: 3.5,
+        minSolutalMargin: null,
+        zones: [
+          { name: 'Zone 1', residenceTime: 20, thicknessOut: 45e-6, solidsOut: 0.42, maxFilmTemperature: 318.15, solventLitresPerMinute: 0.8, freshAirRequired: 12, lflFraction: 0.12, ventilationText: null },
+        ],
+      },
+    });
+    await ctx.db.insert(propertySpreads).values({
+      checkId: own.body.id,
+      revision: 1,
+      status: 'done',
+      samples: 2000,
+      seed: 7,
+      chunkSize: 2000,
+      uncertainties: [],
+      layer: {},
+      plan: {},
+      evaluatedSamples: 2000,
+      result: {
+        validSamples: 2000,
+        onsetProbability: 0.031,
+        marginPercentiles: { p5: 1.1, p50: 1.6, p95: 2.2 },
+        swing: [
+          { name: 'viscosity', marginLow: 1.4, marginHigh: 1.8, swing: 0.4 },
+          { name: 'surfaceTensionSlope', marginLow: 2.1, marginHigh: 1.2, swing: 0.9 },
+        ],
+      },
+      finishedAt: new Date(),
+    });
+    const sheet = await newSheet(agents.author, { checkId: own.body.id });
+    const detail = await agents.author.get(`/api/sheets/${sheet.id}`);
+    expect(detail.body.snapshot.dryingPath).toMatchObject({ title: 'Oven at 3 m/min', minThermalMargin: 3.5, zones: [{ zone: 'Zone 1', lflFraction: 0.12 }] });
+    expect(detail.body.snapshot.propertySpread).toMatchObject({ samples: 2000, probabilityOfOnset: 0.031, marginP50: 1.6 });
+    expect(detail.body.snapshot.propertySpread.drivers.map((d: { property: string }) => d.property)).toEqual(['surfaceTensionSlope', 'viscosity']);
+    const text = pdfText(await pdfOf(sheet.id));
+    expect(text).toContain('Drying path: Oven at 3 m/min');
+    expect(text).toContain('No cells form along the path.');
+    expect(text).toMatch(/Zone 1\s+20\.00 s\s+45\.00 µm\s+42\.0 %\s+45\.0 °C\s+0\.8000 L\/min\s+12\.0 %/);
+    expect(text).toContain('Property spread');
+    expect(text).toMatch(/Probability of onset\s+3\.10 %/);
+    expect(text).toMatch(/1\.10 \/ 1\.60 \/ 2\.20/);
   });
 });

@@ -6,6 +6,7 @@ import type { sheetListQuerySchema } from '../../../shared/schemas/sheets';
 import type { DbOrTx } from '../../db/client';
 import { escapeLike } from '../../db/escape-like';
 import { auditEvents } from '../../db/schema/audit';
+import { dryingSetups, propertySpreads } from '../../db/schema/beyond-onset';
 import { fluids } from '../../db/schema/fluids';
 import { checkRevisions, layerChecks } from '../../db/schema/layer-checks';
 import { processSheets, sheetNumberCounters, sheetReturns, sheetRevisions, sheetSignatures } from '../../db/schema/sheets';
@@ -278,3 +279,25 @@ export async function findFluidForSnapshot(db: DbOrTx, fluidId: string) {
   return row;
 }
 
+
+/** The newest drying set-up saved against a check revision (title and stored result summary). */
+export async function findLatestDryingSetup(db: DbOrTx, checkId: string, revision: number) {
+  const [row] = await db
+    .select({ title: dryingSetups.title, summary: dryingSetups.resultSummary })
+    .from(dryingSetups)
+    .where(and(eq(dryingSetups.checkId, checkId), eq(dryingSetups.revision, revision)))
+    .orderBy(desc(dryingSetups.createdAt))
+    .limit(1);
+  return row;
+}
+
+/** The newest finished Property spread of a check revision (its stored result). */
+export async function findLatestFinishedSpread(db: DbOrTx, checkId: string, revision: number) {
+  const [row] = await db
+    .select({ result: propertySpreads.result })
+    .from(propertySpreads)
+    .where(and(eq(propertySpreads.checkId, checkId), eq(propertySpreads.revision, revision), eq(propertySpreads.status, 'done')))
+    .orderBy(desc(propertySpreads.finishedAt))
+    .limit(1);
+  return row;
+}

@@ -23,6 +23,7 @@ import type { Env } from '../../env';
 import { ConflictError, NotFoundError, TooManyRequestsError, UnprocessableError } from '../../errors';
 import { enqueueMail } from '../../mail/enqueue-mail';
 import { recordAuditEvent } from '../audit/record-audit-event';
+import { dryingPathForSheet, propertySpreadForSheet } from './beyond-onset-summaries';
 import { buildSheetSnapshot } from './build-sheet-snapshot';
 import { renderSheetPdf, type SheetPdfInput } from './pdf/render-sheet-pdf';
 import { reviewRequestMail, sheetReturnedMail, sheetSignedMail, signFailuresAlertMail, type SheetMailContext } from './sheet-mail';
@@ -35,6 +36,8 @@ import {
   findBySignedSha,
   findCheckRevisionForSheet,
   findFluidForSnapshot,
+  findLatestDryingSetup,
+  findLatestFinishedSpread,
   findPasswordHash,
   findReturns,
   findRevision,
@@ -144,6 +147,15 @@ async function snapshotOfCheck(db: DbOrTx, checkId: string, checkRevision?: numb
     revision: { revision: found.revision.revision, input: found.revision.input, savedAt: found.revision.savedAt, savedByName: found.revision.savedByName },
     fluid,
   });
+  // Drying path and Property spread where the check revision has them (optional parts of a sheet).
+  const [drying, spread] = await Promise.all([
+    findLatestDryingSetup(db, checkId, found.revision.revision),
+    findLatestFinishedSpread(db, checkId, found.revision.revision),
+  ]);
+  const dryingPath = drying ? dryingPathForSheet(drying.title, drying.summary) : undefined;
+  const propertySpread = spread ? propertySpreadForSheet(spread.result) : undefined;
+  if (dryingPath) snapshot.dryingPath = JSON.parse(JSON.stringify(dryingPath));
+  if (propertySpread) snapshot.propertySpread = JSON.parse(JSON.stringify(propertySpread));
   return { snapshot, check: found.check, checkRevision: found.revision.revision };
 }
 

@@ -253,24 +253,28 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
   }
 
   if (snapshot.dryingPath) {
-    w.heading('Drying path');
-    w.paragraph(snapshot.dryingPath.summary, { size: 8.5 });
+    const dp = snapshot.dryingPath;
+    w.heading(`Drying path: ${dp.title}`);
+    w.paragraph(dp.verdictText, { size: 8.5 });
+    w.paragraph(`Smallest margin along the path: thermal ${dp.minThermalMargin === null ? 'no onset' : num(dp.minThermalMargin, 3)}, solutal ${dp.minSolutalMargin === null ? 'no onset' : num(dp.minSolutalMargin, 3)}.`, { size: 8.5 });
     w.table(
       [
         { header: 'Zone', width: 90 },
-        { header: 'Residence time', width: 80, align: 'right' },
-        { header: 'Wet film out', width: 85, align: 'right' },
-        { header: 'Solids out', width: 75, align: 'right' },
-        { header: 'Smallest margin', width: 85, align: 'right' },
-        { header: 'Solvent load', width: w.width - 415, align: 'right' },
+        { header: 'Residence time', width: 75, align: 'right' },
+        { header: 'Wet film out', width: 75, align: 'right' },
+        { header: 'Solids out', width: 65, align: 'right' },
+        { header: 'Hottest film', width: 70, align: 'right' },
+        { header: 'Solvent', width: 60, align: 'right' },
+        { header: 'Share of LFL', width: w.width - 435, align: 'right' },
       ],
-      snapshot.dryingPath.zones.map((z) => [
+      dp.zones.map((z) => [
         z.zone,
         withUnit(z.residenceTime, 's'),
         length(z.thicknessOut),
         `${num(z.solidsOut * 100, 3)} %`,
-        z.minMargin === null ? 'no onset' : num(z.minMargin, 3),
-        z.solventLoad === null ? '—' : withUnit(z.solventLoad * 3600, 'kg/h'),
+        `${num(z.maxFilmTemperature - 273.15, 3)} °C`,
+        z.solventLitresPerMinute === null ? '—' : withUnit(z.solventLitresPerMinute, 'L/min'),
+        z.lflFraction === null ? '—' : `${num(z.lflFraction * 100, 3)} %`,
       ]),
     );
   }
