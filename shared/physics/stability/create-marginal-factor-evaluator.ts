@@ -1,4 +1,5 @@
 import { chebyshevCollocationTable } from './chebyshev-collocation-table';
+import { createCollocationWorkspace, type CollocationWorkspace } from './collocation-workspace';
 import { marginalFactorAt } from './marginal-factor-at';
 import type { CheckedProblem } from './validate-problem';
 
@@ -14,7 +15,8 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
 
 /**
  * Build λ(k) for one checked problem. The collocation grids come from the shared read-only table
- * (chebyshevCollocationTable), so building an evaluator costs nothing.
+ * (chebyshevCollocationTable), so building an evaluator costs nothing; the scratch arrays of the
+ * kernel are kept in the returned closure per order (nothing is kept between calls of this function).
  *
  * ## Method
  * Chooses the Chebyshev order from the wavenumber (12 nodes + 1 up to k = 4, rising to 36 for
@@ -29,6 +31,8 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
  * @example createMarginalFactorEvaluator(validateProblem({bottom:'free',bottomThermal:'conducting',top:'free',biot:Infinity,rayleigh:1,marangoni:0}))(Math.PI / Math.SQRT2) // ≈ 657.511
  */
 export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenumber: number) => number {
+  // Scratch arrays per collocation order, owned by this closure (so repeated λ(k) allocate nothing).
+  const workspaces = new Map<number, CollocationWorkspace>();
   return (wavenumber: number): number => {
     let order = ORDER_BANDS[ORDER_BANDS.length - 1][1];
     for (const [limit, bandOrder] of ORDER_BANDS) {
@@ -37,6 +41,11 @@ export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenum
         break;
       }
     }
-    return marginalFactorAt(problem, chebyshevCollocationTable(order), wavenumber);
+    let workspace = workspaces.get(order);
+    if (workspace === undefined) {
+      workspace = createCollocationWorkspace(order + 1);
+      workspaces.set(order, workspace);
+    }
+    return marginalFactorAt(problem, chebyshevCollocationTable(order), wavenumber, workspace);
   };
 }

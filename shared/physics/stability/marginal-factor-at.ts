@@ -1,6 +1,7 @@
 import type { ChebyshevCollocation } from './chebyshev-collocation';
-import { matrixEigenvalues } from './matrix-eigenvalues';
-import { solveLinearSystems } from './solve-linear-systems';
+import { createCollocationWorkspace, type CollocationWorkspace } from './collocation-workspace';
+import { matrixEigenvaluesInPlace } from './matrix-eigenvalues';
+import { solveLinearSystemsInPlace } from './solve-linear-systems-in-place';
 import type { CheckedProblem } from './validate-problem';
 
 /** Relative size of an imaginary part below which an eigenvalue counts as real (round-off splits double roots). */
@@ -60,10 +61,16 @@ const NEGLIGIBLE_DRIVE = 1e-13;
  * @param problem - checked problem (see validateProblem)
  * @param grid - collocation grid (see chebyshevCollocation)
  * @param wavenumber - k [1/d], finite > 0
+ * @param workspace - scratch arrays for grid.size nodes (optional; a fresh one is made when absent)
  * @returns λ(k) [-] > 0, or Infinity when no stationary neutral mode exists along the ray
  * @example marginalFactorAt(validateProblem({bottom:'rigid',bottomThermal:'conducting',top:'rigid',biot:Infinity,rayleigh:1000,marangoni:0}), chebyshevCollocation(20), 3.117) // ≈ 1.7078
  */
-export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevCollocation, wavenumber: number): number {
+export function marginalFactorAt(
+  problem: CheckedProblem,
+  grid: ChebyshevCollocation,
+  wavenumber: number,
+  workspace: CollocationWorkspace = createCollocationWorkspace(grid.size),
+): number {
   const { size: n, d1, d2, d3, d4 } = grid;
   const k2 = wavenumber * wavenumber;
   const k4 = k2 * k2;
@@ -85,14 +92,15 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
 
   // Surface deflection H = h·W (row vector); zero for a flat surface.
   const deformable = surface && problem.crispation > 0;
-  const h = new Float64Array(n);
+  const { h, s, a, e, hy, z, kmat, re, im } = workspace;
+  h.fill(0);
   if (deformable) {
     const scale = problem.crispation / (k2 * (problem.bond + k2));
     for (let j = 0; j < n; j++) h[j] = scale * (d3[j] - 3 * k2 * d1[j]);
   }
 
   // Thermal operator S·Θ = R·W (interior (D² − k²)Θ = −W; top Biot row with Bi·H; bottom row).
-  const s = new Float64Array(n * n);
+  s.fill(0);
   for (let i = 1; i < last; i++) {
     for (let j = 0; j < n; j++) s[i * n + j] = d2[i * n + j];
     s[i * n + i] -= k2;
@@ -107,7 +115,7 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
   else s[last * n + last] = 1;
 
   // Mechanical operator A (row replacement for the four boundary conditions).
-  const a = new Float64Array(n * n);
+  a.fill(0);
   for (let i = 2; i < last - 1; i++) {
     for (let j = 0; j < n; j++) a[i * n + j] = d4[i * n + j] - 2 * k2 * d2[i * n + j];
     a[i * n + i] += k4;
@@ -124,18 +132,17 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
   if (hasMarangoni) rows.push(1);
   if (hasBuoyancy) for (let i = 2; i < last - 1; i++) rows.push(i);
   const m = rows.length;
-  const e = new Float64Array(n * m);
+  e.fill(0, 0, n * m);
   for (let q = 0; q < m; q++) e[rows[q] * m + q] = 1;
-  const y = solveLinearSystems(a, n, e, m);
-  if (y === null) return Infinity;
-  const hy = new Float64Array(m); // H of each column of Y
+  if (!solveLinearSystemsInPlace(a, n, e, m)) return Infinity;
+  const y = e;
+  hy.fill(0, 0, m); // H of each column of Y
   if (deformable) for (let j = 0; j < n; j++) for (let q = 0; q < m; q++) hy[q] += h[j] * y[j * m + q];
-  const z = new Float64Array(n * m);
+  z.fill(0, 0, n * m);
   for (let i = 1; i < last; i++) for (let q = 0; q < m; q++) z[i * m + q] = -y[i * m + q];
   for (let q = 0; q < m; q++) z[q] = conductingTop ? hy[q] : problem.biot * hy[q];
-  const theta = solveLinearSystems(s, n, z, m);
-  if (theta === null) return Infinity;
-  const kmat = new Float64Array(m * m);
+  if (!solveLinearSystemsInPlace(s, n, z, m)) return Infinity;
+  const theta = z;
   for (let p = 0; p < m; p++) {
     const i = rows[p];
     if (i === 1) {
@@ -146,12 +153,14 @@ export function marginalFactorAt(problem: CheckedProblem, grid: ChebyshevColloca
       for (let q = 0; q < m; q++) kmat[p * m + q] = f * theta[i * m + q];
     }
   }
-  const eig = matrixEigenvalues(kmat, m);
-  if (eig === null) return Infinity;
   let best = 0;
-  for (let i = 0; i < m; i++) {
-    const mu = eig.re[i];
-    if (mu > best && Math.abs(eig.im[i]) <= REAL_TOLERANCE * mu) best = mu;
+  if (m === 1) best = Math.max(0, kmat[0]); // pure thermocapillarity: K is 1×1, its entry is μ
+  else {
+    if (!matrixEigenvaluesInPlace(kmat, m, re, im)) return Infinity;
+    for (let i = 0; i < m; i++) {
+      const mu = re[i];
+      if (mu > best && Math.abs(im[i]) <= REAL_TOLERANCE * mu) best = mu;
+    }
   }
   const lambda = 1 / best / driveScale;
   return Number.isFinite(lambda) && lambda > 0 ? lambda : Infinity;

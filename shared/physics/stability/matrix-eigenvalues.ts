@@ -31,17 +31,37 @@ export interface Eigenvalues {
  * @example matrixEigenvalues(new Float64Array([0, 1, -1, 0]), 2) // re [0, 0], im [±1]
  */
 export function matrixEigenvalues(matrix: Float64Array, n: number): Eigenvalues | null {
-  const a = Float64Array.from(matrix);
   const re = new Float64Array(n);
   const im = new Float64Array(n);
+  return matrixEigenvaluesInPlace(Float64Array.from(matrix), n, re, im) ? { re, im } : null;
+}
+
+/**
+ * All eigenvalues of a real non-symmetric matrix, overwriting the matrix (no copies).
+ *
+ * ## Method
+ * As matrixEigenvalues (balancing, Hessenberg reduction, Francis double-shift QR) on `a` itself,
+ * so a caller that solves many small eigenproblems can reuse its arrays.
+ *
+ * ## References
+ * - Martin, R. S., Peters, G. & Wilkinson, J. H. (1970) Numer. Math. 14, 219–231. doi:10.1007/BF02163331
+ *
+ * @param a - row-major n×n matrix (overwritten)
+ * @param n - order, ≥ 1
+ * @param re - receives the real parts (length ≥ n)
+ * @param im - receives the imaginary parts (length ≥ n)
+ * @returns true, or false if QR did not converge within 60 iterations for some eigenvalue
+ * @example matrixEigenvaluesInPlace(new Float64Array([0, 1, -1, 0]), 2, re, im) // re [0, 0], im [±1]
+ */
+export function matrixEigenvaluesInPlace(a: Float64Array, n: number, re: Float64Array, im: Float64Array): boolean {
   if (n === 1) {
     re[0] = a[0];
-    return { re, im };
+    im[0] = 0;
+    return true;
   }
   balance(a, n);
   reduceToHessenberg(a, n);
-  const ok = hessenbergQr(a, n, re, im);
-  return ok ? { re, im } : null;
+  return hessenbergQr(a, n, re, im);
 }
 
 function balance(a: Float64Array, n: number): void {
