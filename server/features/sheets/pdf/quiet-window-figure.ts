@@ -130,6 +130,16 @@ export function drawQuietWindowFigure(doc: Doc, window: SnapshotWindow, box: Fig
   text(driveLabel, box.x + 6 - plot.height / 2, plot.y + plot.height / 2 - 4, { size: 8, width: plot.height, align: 'center' });
   doc.restore();
 
+  // Say so when a boundary lies wholly above the plotted drive range (its curve is then not drawn).
+  const visible = (values: (number | null)[]) => values.some((v) => v !== null && Number.isFinite(v) && v <= driveMax);
+  const hidden = [
+    ...(visible(window.cellBoundary) ? [] : ['cell onset']),
+    ...(visible(window.longWaveBoundary) ? [] : ['long-wave onset']),
+  ];
+  if (hidden.length > 0) {
+    text(`No ${hidden.join(' or ')} within this range of depth and ${byFlux ? 'heat flux' : 'ΔT'}.`, plot.x + 6, plot.y + 4, { size: 7, width: plot.width - 12 });
+  }
+
   // Operating point.
   const op = window.operatingPoint;
   const ox = xOf(Math.min(Math.max(op.depth, dMin), dMax));
