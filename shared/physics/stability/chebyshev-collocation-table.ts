@@ -5,10 +5,12 @@ import { chebyshevCollocation, type ChebyshevCollocation } from './chebyshev-col
  *
  * This is the solver's only module-level table. It is pure in effect: the grid of an order is a
  * fixed mathematical object (nodes and differentiation matrices depend on the order alone), it
- * is built lazily on first use by the same deterministic function whatever the caller, every
- * array is frozen against re-assignment of the object and never written by the solver (the kernel
- * only reads d1…d4), and no caller can observe whether a grid came from the table or was freshly
- * built. It only saves rebuilding the same matrices (≈ 3·n³ operations) for every evaluator.
+ * is built lazily on first use by the same deterministic function whatever the caller, the grid
+ * object is frozen (its arrays cannot be swapped) and its typed arrays, which JavaScript cannot
+ * freeze, are never written by the solver (the kernel only reads z and d1…d4; the table is not
+ * exported from the package), and no caller can observe whether a grid came from the table or was
+ * freshly built. At most one grid per order of the band table is kept (six). It only saves
+ * rebuilding the same matrices (≈ 3·n³ operations) for every evaluator.
  */
 const GRIDS = new Map<number, ChebyshevCollocation>();
 

@@ -1,6 +1,8 @@
 /**
  * Linear stability solver of QuietLayer: stationary onset of buoyancy and thermocapillary
- * convection in a horizontal liquid layer, flat or deformable surface. Pure functions, no state.
+ * convection in a horizontal liquid layer, flat or deformable surface. Pure functions; the only
+ * module-level data is the lazily built, read-only table of collocation grids
+ * (chebyshev-collocation-table.ts), which no caller can observe.
  *
  * - marginalFactor(problem, wavenumber): λ(k)
  * - neutralCurve(problem, options)
