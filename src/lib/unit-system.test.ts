@@ -5,7 +5,7 @@
  * 1 Btu_IT/(h·ft²·°F) = 5.678 263 W/(m²·K); 1 ft/min = 0.005 08 m/s.
  */
 import { describe, expect, it } from 'vitest';
-import { formatInSystem, formatNumber, withPowerOfTen } from './unit-system';
+import { formatInSystem, formatLengthForScale, formatNumber, withPowerOfTen } from './unit-system';
 
 describe('formatInSystem', () => {
   it('shows a wet thickness in µm on the coating floor and in mil in US units', () => {
@@ -55,5 +55,15 @@ describe('formatNumber', () => {
   it('rewrites an exponent only where a digit precedes it', () => {
     expect(withPowerOfTen('1.5e-3 m')).toBe('1.5 × 10⁻³ m');
     expect(withPowerOfTen('degree')).toBe('degree');
+  });
+});
+
+describe('formatLengthForScale', () => {
+  it('picks µm, mm or m on the coating floor and mil or in in US units (1 in = 25.4 mm, NIST SP 811)', () => {
+    expect(formatLengthForScale(200e-6, 'floor')).toBe('200 µm');
+    expect(formatLengthForScale(0.01, 'floor')).toBe('10.0 mm');
+    expect(formatLengthForScale(1.2, 'floor')).toBe('1.20 m');
+    expect(formatLengthForScale(0.0254, 'us')).toBe('1.00 in');
+    expect(formatLengthForScale(254e-6, 'us')).toBe('10.0 mil');
   });
 });

@@ -144,6 +144,20 @@ export function formatInSystem(si: number | null | undefined, kind: QuantityKind
   }
 }
 
+/**
+ * A length in the system's family but with a unit that suits its size (a scale bar of 10 mm, not
+ * 10 000 µm): µm → mm → m on the coating floor, mil → in in US units, m in SI.
+ */
+export function formatLengthForScale(si: number, system: UnitSystem, significantDigits = 3): string {
+  if (!Number.isFinite(si)) return '—';
+  const unit = system === 'si' ? 'm' : system === 'us' ? (si < 0.0254 ? 'mil' : 'in') : si < 1e-3 ? 'µm' : si < 1 ? 'mm' : 'm';
+  try {
+    return withPowerOfTen(formatQuantity(si, 'length', unit, significantDigits));
+  } catch {
+    return '—';
+  }
+}
+
 /** A dimensionless number with 4 significant digits (thin space before a power of ten). */
 export function formatNumber(value: number | null | undefined, significantDigits = 4): string {
   if (value === null || value === undefined) return '—';

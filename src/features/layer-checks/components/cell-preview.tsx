@@ -1,5 +1,5 @@
 import type { LayerEvaluation } from '../../../../shared/schemas/layer-checks';
-import { formatInSystem, type UnitSystem } from '../../../lib/unit-system';
+import { formatInSystem, formatLengthForScale, type UnitSystem } from '../../../lib/unit-system';
 
 const WIDTH = 360;
 const HEIGHT = 200;
@@ -45,10 +45,10 @@ export function CellPreview({ evaluation, panelWidth, system }: { evaluation: La
   }
 
   const caption = cellular
-    ? `Cells about ${formatInSystem(spacing, 'length', system, 3)} centre to centre, drawn to scale over a patch ${formatInSystem(patchWidth, 'length', system, 3)} wide${panelWidth !== null ? ` of the ${formatInSystem(panelWidth, 'length', system, 3)} panel` : ''}.`
+    ? `Cells about ${formatInSystem(spacing, 'length', system, 3)} centre to centre, drawn to scale over a patch ${formatLengthForScale(patchWidth, system)} wide${panelWidth !== null ? ` of the ${formatLengthForScale(panelWidth, system)} panel` : ''}.`
     : evaluation.regime === 'long-wave-thinning' && over
-      ? `No cells: the layer thins over long distances (long-wave thinning, dry spots) rather than forming a cell pattern. Patch ${formatInSystem(patchWidth, 'length', system, 3)} wide.`
-      : `Quiet: no cells expected; the surface stays level. Patch ${formatInSystem(patchWidth, 'length', system, 3)} wide.`;
+      ? `No cells: the layer thins over long distances (long-wave thinning, dry spots) rather than forming a cell pattern. Patch ${formatLengthForScale(patchWidth, system)} wide.`
+      : `Quiet: no cells expected; the surface stays level. Patch ${formatLengthForScale(patchWidth, system)} wide.`;
 
   return (
     <figure className="flex flex-col gap-2" data-testid="cell-preview">
@@ -72,7 +72,7 @@ export function CellPreview({ evaluation, panelWidth, system }: { evaluation: La
           <line x1="0" y1="1" x2="0" y2="11" stroke="#1d2733" strokeWidth="1.5" />
           <line x1={barPixels} y1="1" x2={barPixels} y2="11" stroke="#1d2733" strokeWidth="1.5" />
           <text x={barPixels + 8} y="10" fontSize="11" fill="#1d2733">
-            {formatInSystem(bar, 'length', system, 3)}
+            {formatLengthForScale(bar, system, 2)}
           </text>
         </g>
       </svg>

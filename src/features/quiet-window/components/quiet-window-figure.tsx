@@ -161,10 +161,15 @@ export function QuietWindowFigure({ window: w, system, threshold }: { window: Qu
         <div className="rounded-md bg-paper-sunk px-3 py-2">
           <dt className="text-sm text-ink-soft">Quiet depths at this heating</dt>
           <dd className="font-semibold tabular-nums">
-            {w.sizing.minStableDepth === null ? 'from 0' : `from ${formatInSystem(w.sizing.minStableDepth, 'length', system)}`}{' '}
-            {w.sizing.maxStableDepth === null ? 'with no upper limit' : `to ${formatInSystem(w.sizing.maxStableDepth, 'length', system)}`}
-            {w.sizing.minStableDepth !== null && w.sizing.maxStableDepth !== null && w.sizing.minStableDepth > w.sizing.maxStableDepth && (
-              <span className="block text-sm font-normal text-over-dark">No depth is quiet at this heating: cells above, long-wave thinning below.</span>
+            {w.sizing.minStableDepth !== null && w.sizing.maxStableDepth !== null && w.sizing.minStableDepth > w.sizing.maxStableDepth ? (
+              <span className="text-over-dark">
+                None: cells above {formatInSystem(w.sizing.maxStableDepth, 'length', system)}, long-wave thinning below {formatInSystem(w.sizing.minStableDepth, 'length', system)}.
+              </span>
+            ) : (
+              <>
+                {w.sizing.minStableDepth === null ? 'from 0' : `from ${formatInSystem(w.sizing.minStableDepth, 'length', system)}`}{' '}
+                {w.sizing.maxStableDepth === null ? 'with no upper limit' : `to ${formatInSystem(w.sizing.maxStableDepth, 'length', system)}`}
+              </>
             )}
           </dd>
         </div>
