@@ -10,6 +10,7 @@ import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { projectRoot } from '../../scripts/lib/project-root';
+import { wcagViolations } from './support/accessibility';
 import { launchBrowser, newPage, screenshot, screenshotDir, signIn, DEMO_PASSWORD } from './support/browser';
 import { startTestApp, type TestApp } from './support/app-server';
 
@@ -68,6 +69,12 @@ describe('process sheet from issue to signature', () => {
       await engineer.page.getByRole('button', { name: 'Submit for review' }).waitFor({ state: 'detached' });
       await engineer.page.getByText('Waiting for a QA reviewer.').waitFor();
       await screenshot(engineer.page, 'sheet-awaiting-review');
+      // WCAG 2.1 AA (axe-core) on the sheet page and the list.
+      expect(await wcagViolations(engineer.page)).toEqual([]);
+      await engineer.page.goto('/sheets');
+      await engineer.page.getByRole('link', { name: /LC-PS-\d{4} rev\. 1/ }).waitFor();
+      expect(await wcagViolations(engineer.page)).toEqual([]);
+      await screenshot(engineer.page, 'sheets-list');
       await engineer.context.close();
 
       // Act 2: the reviewer opens it and signs with password and meaning.
@@ -77,6 +84,7 @@ describe('process sheet from issue to signature', () => {
       await reviewer.page.getByRole('button', { name: 'Sign…' }).click();
       const dialog = reviewer.page.getByRole('dialog');
       await dialog.getByLabel(/Approved for production/).check();
+      expect(await wcagViolations(reviewer.page)).toEqual([]);
       await dialog.getByLabel('Your password').fill('not the password');
       await dialog.getByRole('button', { name: 'Sign sheet' }).click();
       await dialog.getByText('The password is not right.').waitFor();
@@ -110,6 +118,7 @@ describe('process sheet from issue to signature', () => {
       await reviewer.page.getByRole('button', { name: 'Verify' }).click();
       await reviewer.page.getByText(/This is the signed PDF of LC-PS-\d{4} revision 1/).waitFor();
       await screenshot(reviewer.page, 'sheet-verify');
+      expect(await wcagViolations(reviewer.page)).toEqual([]);
       await reviewer.context.close();
     },
     E2E_TIMEOUT,
