@@ -5,7 +5,13 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { EMPTY_STYLE_HASH, PLOT_MAP_STYLE_HASH, PLOT_TEXT_TAG_STYLES } from '../../server/middleware/security-headers';
 import { createTestContext, type TestContext } from '../integration/helpers/test-app';
+
+const sha256 = (text: string) => `'sha256-${createHash('sha256').update(text, 'utf8').digest('base64')}'`;
 
 function directives(header: string): Map<string, string[]> {
   return new Map(
@@ -35,9 +41,9 @@ describe('Content-Security-Policy', () => {
     expect(csp.get('default-src')).toEqual(["'self'"]);
     expect(csp.get('script-src')).toEqual(["'self'"]);
     expect(csp.get('script-src-attr')).toEqual(["'none'"]);
-    expect(csp.get('style-src')).toEqual(["'self'"]);
+    expect(csp.get('style-src')).toEqual(["'self'", EMPTY_STYLE_HASH, PLOT_MAP_STYLE_HASH]);
     expect(csp.get('object-src')).toEqual(["'none'"]);
-    expect(csp.get('frame-ancestors')).toEqual(["'none'"]);
+    expect(csp.get('frame-ancestors')).toEqual(["'self'"]);
     expect(csp.get('base-uri')).toEqual(["'self'"]);
     for (const [name, values] of csp) {
       expect(values, name).not.toContain("'unsafe-inline'");
@@ -45,6 +51,27 @@ describe('Content-Security-Policy', () => {
       expect(values, name).not.toContain('https:');
       expect(values, name).not.toContain('*');
     }
+  });
+
+  it('allows by hash only an empty style element and the plotting bundle’s own map stylesheet, as installed', () => {
+    expect(EMPTY_STYLE_HASH).toBe(sha256(''));
+    // The exact stylesheet text the installed plotting bundle injects (element.textContent = '…').
+    const bundle = readFileSync(createRequire(import.meta.url).resolve('plotly.js-dist-min'), 'utf8');
+    const literal = /textContent='(\.maplibregl-map\{[^']*)'/.exec(bundle);
+    expect(literal).not.toBeNull();
+    expect(PLOT_MAP_STYLE_HASH).toBe(sha256(literal![1]));
+  });
+
+  it('allows style attributes only with the plotting library’s fixed rich-text declarations, by hash', async () => {
+    const response = await request(ctx.app).get('/api/health');
+    const attr = directives(response.headers['content-security-policy']).get('style-src-attr');
+    expect(attr).toEqual(["'unsafe-hashes'", ...PLOT_TEXT_TAG_STYLES.map(sha256)]);
+    // The same declarations as the installed bundle's tag table ({sup:"font-size:70%",sub:…}).
+    const bundle = readFileSync(createRequire(import.meta.url).resolve('plotly.js-dist-min'), 'utf8');
+    const table = /\{sup:"font-size:70%"[^}]*\}/.exec(bundle);
+    expect(table).not.toBeNull();
+    const declared = new Set([...table![0].matchAll(/:"([^"]*)"/g)].map((m) => m[1]).filter(Boolean));
+    expect(new Set(PLOT_TEXT_TAG_STYLES)).toEqual(declared);
   });
 
   it('sends the usual companions and no HSTS over plain HTTP', async () => {
