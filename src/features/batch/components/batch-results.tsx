@@ -78,7 +78,7 @@ export function BatchResults({ results, where, fileName, system }: { results: On
           <tbody>
             {shown.map(({ result, where: place }) => (
               <tr key={place} className="border-b border-slate-line/70 align-top">
-                <th scope="row" className="px-2 py-1.5 font-medium">{result.id || '—'}</th>
+                <th scope="row" className="px-2 py-1.5 font-medium whitespace-nowrap">{result.id || '—'}</th>
                 <td className="px-2 py-1.5 whitespace-nowrap text-ink-soft">{place}</td>
                 <td className="px-2 py-1.5">{marginBadge(result)}</td>
                 {result.error ? (

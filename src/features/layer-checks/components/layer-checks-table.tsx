@@ -1,6 +1,7 @@
 import { getCoreRowModel, useReactTable, type ColumnDef, type SortingState } from '@tanstack/react-table';
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
+import { regimeLabels } from '../../../../shared/physics/stability/regime-labels';
 import { processKindLabels, type LayerCheckSummary } from '../../../../shared/schemas/layer-checks';
 import { DataTable } from '../../../components/ui/data-table';
 import { StatusBadge, type StatusTone } from '../../../components/ui/status-badge';
@@ -14,6 +15,12 @@ function savedMarginTone(margin: number | null): { tone: StatusTone; word: strin
   if (margin >= 1.25) return { tone: 'quiet', word: 'Quiet' };
   if (margin >= 1) return { tone: 'close', word: 'Close' };
   return { tone: 'over', word: 'Over' };
+}
+
+/** The stored regime in words (the server stores the regime's code). */
+function regimeLabel(saved: string | null): string {
+  if (!saved) return '—';
+  return (regimeLabels as Readonly<Record<string, string>>)[saved] ?? saved;
 }
 
 interface LayerChecksTableProps {
@@ -54,7 +61,7 @@ export function LayerChecksTable({ checks, system, sorting, onSortingChange, bus
           );
         },
       },
-      { id: 'regime', header: 'Regime', enableSorting: false, meta: { className: 'hidden lg:table-cell' }, cell: ({ row }) => row.original.savedRegime ?? '—' },
+      { id: 'regime', header: 'Regime', enableSorting: false, meta: { className: 'hidden lg:table-cell' }, cell: ({ row }) => regimeLabel(row.original.savedRegime) },
       { id: 'owner', header: 'Owner', enableSorting: false, meta: { className: 'hidden xl:table-cell' }, cell: ({ row }) => row.original.ownerName ?? '—' },
       { id: 'revision', header: 'Rev.', enableSorting: false, meta: { className: 'text-right tabular-nums' }, cell: ({ row }) => row.original.revision },
       { id: 'updatedAt', header: 'Saved', meta: { className: 'hidden lg:table-cell whitespace-nowrap' }, cell: ({ row }) => formatDateTime(row.original.updatedAt) },
