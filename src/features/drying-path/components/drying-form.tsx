@@ -51,8 +51,8 @@ export function DryingForm({ values, errors, busy, onChange, onSubmit }: DryingF
         <Field label="Oven transport">
           {({ id }) => (
             <Select id={id} value={values.transport} onChange={(e) => set('transport', e.target.value as DryingFormValues['transport'])}>
-              <option value="line">Line speed through zone lengths</option>
-              <option value="schedule">Time schedule (seconds per zone)</option>
+              <option value="line">Line speed and zone lengths</option>
+              <option value="schedule">Seconds per zone</option>
             </Select>
           )}
         </Field>
@@ -68,10 +68,10 @@ export function DryingForm({ values, errors, busy, onChange, onSubmit }: DryingF
         </Field>
       </Section>
 
-      <fieldset className="rounded-md border border-slate-line bg-paper-raised px-4 pb-4">
+      <fieldset className="min-w-0 rounded-md border border-slate-line bg-paper-raised px-4 pb-4">
         <legend className="px-1 font-semibold text-ink">Oven zones</legend>
         <div className="overflow-x-auto">
-          <table className="w-full min-w-[40rem] text-sm">
+          <table className="w-full min-w-[36rem] text-sm">
             <thead>
               <tr className="text-left text-ink-soft">
                 <th className="py-1 pr-2 font-medium">Zone</th>
@@ -138,14 +138,14 @@ export function DryingForm({ values, errors, busy, onChange, onSubmit }: DryingF
         <Field label="Evaporation">
           {({ id }) => (
             <Select id={id} value={values.volatility} onChange={(e) => set('volatility', e.target.value as DryingFormValues['volatility'])}>
-              <option value="antoine">Vapour pressure (Antoine, log₁₀ bar, K)</option>
+              <option value="antoine">Antoine vapour pressure</option>
               <option value="fixed-rate">Fixed evaporation rate</option>
             </Select>
           )}
         </Field>
         {values.volatility === 'antoine' ? (
           <>
-            {plain('antoineA', 'Antoine A')}
+            {plain('antoineA', 'Antoine A', 'log₁₀(p/bar) = A − B/(T/K + C)')}
             {plain('antoineB', 'Antoine B [K]')}
             {plain('antoineC', 'Antoine C [K]')}
             {quantity('vapourDiffusivityInAir', 'Vapour diffusivity in air', ['diffusivity'])}
@@ -161,7 +161,7 @@ export function DryingForm({ values, errors, busy, onChange, onSubmit }: DryingF
         <Field label="Viscosity law">
           {({ id }) => (
             <Select id={id} value={values.viscosityKind} onChange={(e) => set('viscosityKind', e.target.value as DryingFormValues['viscosityKind'])}>
-              <option value="exponential">Exponential, μ = μ_s·exp(Bφ) (Arrhenius 1887)</option>
+              <option value="exponential">Exponential (Arrhenius 1887)</option>
               <option value="krieger-dougherty">Krieger–Dougherty (1959)</option>
             </Select>
           )}

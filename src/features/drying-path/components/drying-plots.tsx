@@ -53,6 +53,8 @@ export function DryingPlots({ answer }: { answer: DryingPathAnswer }) {
   // Margins of null (infinite: no onset possible) are left out of the line.
   const margin = (values: (number | null)[]) => values.map((m) => (m === null || !Number.isFinite(m) ? null : m));
   const height = 260;
+  const smallest = Math.min(answer.onset.minSolutalMargin ?? Infinity, answer.onset.minThermalMargin ?? Infinity, 1);
+  const marginFloor = Math.floor(Math.log10(smallest / 2));
 
   return (
     <div className="flex flex-col gap-3">
@@ -86,7 +88,11 @@ export function DryingPlots({ answer }: { answer: DryingPathAnswer }) {
           { x, y: margin(answer.series.thermalMargin as (number | null)[]), type: 'scatter', mode: 'lines', name: 'Thermal margin', line: { color: plotPalette.quiet, width: 2, dash: 'dash' } },
           { x: [x[0], x[x.length - 1]], y: [1, 1], type: 'scatter', mode: 'lines', name: 'Onset (margin 1)', line: { color: plotPalette.ink, width: 1, dash: 'dot' } },
         ]}
-        layout={{ ...baseLayout(xTitle, 'Onset margin [×] (log)', answer, axis), yaxis: { title: { text: 'Onset margin [×] (log)' }, type: 'log', gridcolor: plotPalette.grid } }}
+        layout={{
+          ...baseLayout(xTitle, 'Onset margin [×] (log)', answer, axis),
+          // Near 1 is what matters: show from below the smallest margin up to 10⁴ (larger margins run off the top).
+          yaxis: { title: { text: 'Onset margin [×] (log)' }, type: 'log', range: [marginFloor, 4], exponentformat: 'power', gridcolor: plotPalette.grid },
+        }}
       />
     </div>
   );

@@ -81,14 +81,14 @@ export function DryingResults({ answer }: { answer: DryingPathAnswer }) {
             <tbody>
               {answer.zones.map((z) => (
                 <tr key={z.index} className="border-t border-slate-line">
-                  <td className="px-3 py-2 font-medium">{z.name}</td>
-                  <td className="px-3 py-2 text-right">{sig(z.residenceTime)} s</td>
-                  <td className="px-3 py-2 text-right">{formatInSystem(z.thicknessOut, 'length', system, 3)}</td>
-                  <td className="px-3 py-2 text-right">{sig(z.solidsOut * 100)} %</td>
-                  <td className="px-3 py-2 text-right">{formatInSystem(z.maxFilmTemperature, 'temperature', system, 3)}</td>
-                  <td className="px-3 py-2 text-right">{sig(Math.min(z.minSolutalMargin ?? Infinity, z.minThermalMargin ?? Infinity))} ×</td>
-                  <td className="px-3 py-2 text-right">{z.solventLitresPerMinute === null ? '— (no width)' : `${sig(z.solventLitresPerMinute)} L/min`}</td>
-                  <td className="px-3 py-2 text-right font-semibold">{z.ventilation ? `≥ ${sig(z.ventilation.freshAirRequired * 60)} m³/min` : '—'}</td>
+                  <td className="whitespace-nowrap px-3 py-2 font-medium">{z.name}</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{sig(z.residenceTime)} s</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{formatInSystem(z.thicknessOut, 'length', system, 3)}</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{sig(z.solidsOut * 100)} %</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{formatInSystem(z.maxFilmTemperature, 'temperature', system, 3)}</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{sig(Math.min(z.minSolutalMargin ?? Infinity, z.minThermalMargin ?? Infinity))} ×</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right">{z.solventLitresPerMinute === null ? '— (no width)' : `${sig(z.solventLitresPerMinute)} L/min`}</td>
+                  <td className="whitespace-nowrap px-3 py-2 text-right font-semibold">{z.ventilation ? `≥ ${sig(z.ventilation.freshAirRequired * 60)} m³/min` : '—'}</td>
                 </tr>
               ))}
             </tbody>

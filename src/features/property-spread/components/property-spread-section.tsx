@@ -12,7 +12,7 @@ import { formatDateTime } from '../../../utils/format';
 import { useRunSpread, useSpread, useSpreadsOfCheck } from '../api/spread-api';
 import { SpreadSensitivityChart } from './spread-sensitivity-chart';
 
-const pct = (x: number) => `${formatSignificant(x * 100, 3)} %`;
+const pct = (x: number) => (x < 1e-9 ? '0 %' : `${formatSignificant(x * 100, 3)} %`);
 const margin = (x: number | null) => (x === null ? '∞' : `${formatSignificant(x, 3)} ×`);
 const fieldLabel = (name: string) => spreadFieldLabels[name as SpreadField] ?? name;
 
@@ -66,11 +66,17 @@ function SpreadResultView({ spread }: { spread: PropertySpread }) {
           </p>
         </div>
       </div>
-      <div>
-        <h3 className="mb-1 font-semibold">Which property moves the margin most</h3>
-        <SpreadSensitivityChart result={r} />
-        <p className="text-sm text-ink-soft">Rank correlation between each sampled property and the margin; ± {formatSignificant(r.sensitivityStandardError, 2)} sampling error near 0.</p>
-      </div>
+      {r.minimumMargin === null ? (
+        <Notice tone="info" title="No onset possible in any sample">
+          Every sample is heated from the stable side or has no drive, so the margin is infinite throughout and no property moves it.
+        </Notice>
+      ) : (
+        <div>
+          <h3 className="mb-1 font-semibold">Which property moves the margin most</h3>
+          <SpreadSensitivityChart result={r} />
+          <p className="text-sm text-ink-soft">Rank correlation between each sampled property and the margin; ± {formatSignificant(r.sensitivityStandardError, 2)} sampling error near 0.</p>
+        </div>
+      )}
     </div>
   );
 }
