@@ -57,7 +57,7 @@ const input: SheetPdfInput = {
   createdAt: '2026-12-01T09:00:00Z',
   snapshot,
   signature: { printedName: 'Dörte Quinn', roleLabel: 'QA reviewer', signedAt: '2026-12-02T03:45:12Z', meaningText: 'Approved for production' },
-  returns: [{ reviewerName: 'Dörte Quinn', comments: 'State the source of dσ/dT.', returnedAt: '2026-12-01T12:00:00Z' }],
+  returns: [{ revision: 1, reviewerName: 'Dörte Quinn', comments: 'State the source of dσ/dT.', returnedAt: '2026-12-01T12:00:00Z' }],
   publicUrl: 'http://127.0.0.1:3000',
 };
 

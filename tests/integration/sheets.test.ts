@@ -311,6 +311,10 @@ describe('workflow: sign, revise, supersede', () => {
     expect(revised.body).toMatchObject({ number: sheet.number, revision: 2, state: 'draft', checkRevision: saved.body.revision });
     expect(revised.body.snapshot.input.depth).toBe('0.9 mm');
     expect(revised.body.revisions.map((r: { revision: number }) => r.revision)).toEqual([2, 1]);
+    // The new revision's PDF keeps the reviewer's return of revision 1 and says what it replaces.
+    const text = pdfText(await pdfOf(revised.body.id)).replace(/\s+/g, ' ');
+    expect(text).toMatch(/Revision 1, \d{4}-\d\d-\d\d \d\d:\d\d:\d\d UTC, Test reviewer [^:]+: Thinner, please\./);
+    expect(text).toContain('replaces revision 1 of this sheet once signed');
     expect((await agents.author.post(`/api/sheets/${sheet.id}/revisions`).send({})).status).toBe(409);
     expect((await agents.author.post(`/api/sheets/${revised.body.id}/revisions`).send({})).status).toBe(409);
     expect((await agents.reviewer.post(`/api/sheets/${revised.body.id}/revisions`).send({})).status).toBe(403);

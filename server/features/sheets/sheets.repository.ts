@@ -129,6 +129,16 @@ export async function findSignature(db: DbOrTx, revisionId: string): Promise<Sig
   return row;
 }
 
+/** Returns of every revision of a sheet up to `revision`, oldest first, with the revision they concern. */
+export async function findReturnsOfSheet(db: DbOrTx, sheetId: string, revision: number) {
+  return db
+    .select({ revision: sheetRevisions.revision, reviewerName: sheetReturns.reviewerName, comments: sheetReturns.comments, returnedAt: sheetReturns.returnedAt })
+    .from(sheetReturns)
+    .innerJoin(sheetRevisions, eq(sheetRevisions.id, sheetReturns.revisionId))
+    .where(and(eq(sheetRevisions.sheetId, sheetId), sql`${sheetRevisions.revision} <= ${revision}`))
+    .orderBy(sheetReturns.returnedAt, sheetReturns.id);
+}
+
 export async function findReturns(db: DbOrTx, revisionId: string): Promise<ReturnRow[]> {
   return db.select().from(sheetReturns).where(eq(sheetReturns.revisionId, revisionId)).orderBy(sheetReturns.returnedAt);
 }

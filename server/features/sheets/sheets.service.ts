@@ -40,6 +40,7 @@ import {
   findLatestFinishedSpread,
   findPasswordHash,
   findReturns,
+  findReturnsOfSheet,
   findRevision,
   findSheetFilters,
   findSheetPage,
@@ -334,7 +335,7 @@ export async function returnSheet(
 }
 
 /** The PDF fields of a revision (everything but the signature). */
-function pdfInput(env: Pick<Env, 'PUBLIC_URL'>, row: RevisionWithSheet, returns: Awaited<ReturnType<typeof findReturns>>): Omit<SheetPdfInput, 'signature' | 'state'> {
+function pdfInput(env: Pick<Env, 'PUBLIC_URL'>, row: RevisionWithSheet, returns: Awaited<ReturnType<typeof findReturnsOfSheet>>): Omit<SheetPdfInput, 'signature' | 'state'> {
   return {
     number: row.sheet.number,
     revision: row.revision.revision,
@@ -344,7 +345,7 @@ function pdfInput(env: Pick<Env, 'PUBLIC_URL'>, row: RevisionWithSheet, returns:
     authorName: row.authorName,
     createdAt: row.revision.createdAt.toISOString(),
     snapshot: row.revision.snapshot,
-    returns: returns.map((r) => ({ reviewerName: r.reviewerName, comments: r.comments, returnedAt: r.returnedAt.toISOString() })),
+    returns: returns.map((r) => ({ revision: r.revision, reviewerName: r.reviewerName, comments: r.comments, returnedAt: r.returnedAt.toISOString() })),
     publicUrl: env.PUBLIC_URL,
   };
 }
@@ -402,7 +403,7 @@ export async function signSheet(
     const to = transition('sign', user, workflowView(locked));
     const signedAt = new Date();
     const meaningText = signatureMeaningLabels[input.meaning];
-    const returns = await findReturns(tx, id);
+    const returns = await findReturnsOfSheet(tx, locked.sheet.id, locked.revision.revision);
     const pdf = await renderSheetPdf({
       ...pdfInput(env, locked, returns),
       state: to,
@@ -447,7 +448,7 @@ export async function getSheetPdf(db: DbOrTx, env: Pick<Env, 'PUBLIC_URL'>, id: 
     if (!bytes) throw new NotFoundError('The signed PDF of this revision is missing.');
     return { bytes, filename, signed: true };
   }
-  const returns = await findReturns(db, id);
+  const returns = await findReturnsOfSheet(db, row.sheet.id, row.revision.revision);
   const bytes = await renderSheetPdf({ ...pdfInput(env, row, returns), state: row.revision.state, signature: null });
   return { bytes, filename, signed: false };
 }

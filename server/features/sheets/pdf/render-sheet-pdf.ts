@@ -30,7 +30,8 @@ export interface SheetPdfInput {
   createdAt: string;
   snapshot: SheetSnapshot;
   signature: SheetPdfSignature | null;
-  returns: { reviewerName: string; comments: string; returnedAt: string }[];
+  /** Returns of this and earlier revisions of the sheet, oldest first. */
+  returns: { revision: number; reviewerName: string; comments: string; returnedAt: string }[];
   /** Base URL of this QuietLayer, without a trailing slash. */
   publicUrl: string;
 }
@@ -135,6 +136,7 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
     ...(snapshot.check.notes ? ([['Check notes', snapshot.check.notes]] as [string, string][]) : []),
     ['Fluid', `${snapshot.fluid.name} (${snapshot.fluid.kind}); properties stated at ${snapshot.fluid.referenceTemperature}${snapshot.fluid.validRange ? `, valid ${snapshot.fluid.validRange}` : ''}`],
     ['Prepared by', `${input.authorName}, Process engineer, ${utc(input.createdAt)}`],
+    ...(input.revision > 1 ? ([['Revision', `${input.revision}; replaces revision ${input.revision - 1} of this sheet once signed`]] as [string, string][]) : []),
     ['Method', `Linear stability of the conduction state (Pearson 1958; Nield 1964), QuietLayer solver ${snapshot.solverVersion}`],
   ]);
 
@@ -297,7 +299,7 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
 
   if (input.returns.length > 0) {
     w.heading('Review returns');
-    for (const r of input.returns) w.paragraph(`${utc(r.returnedAt)}, ${r.reviewerName}: ${r.comments}`, { size: 8.5 });
+    for (const r of input.returns) w.paragraph(`Revision ${r.revision}, ${utc(r.returnedAt)}, ${r.reviewerName}: ${r.comments}`, { size: 8.5 });
   }
 
   // Signature block (heading and box stay together on one page).
