@@ -64,7 +64,9 @@ describe('process sheet from issue to signature', () => {
       await engineer.page.waitForURL(/\/sheets\/[0-9a-f-]{36}$/);
       const sheetUrl = new URL(engineer.page.url()).pathname;
       const sheetId = sheetUrl.split('/').pop() as string;
-      await engineer.page.getByRole('heading', { level: 1, name: /LC-PS-\d{4} revision 1/ }).waitFor();
+      const heading = engineer.page.getByRole('heading', { level: 1, name: /LC-PS-\d{4} revision 1/ });
+      await heading.waitFor();
+      const number = /LC-PS-\d{4}/.exec(await heading.innerText())?.[0] as string;
       await engineer.page.getByRole('button', { name: 'Submit for review' }).click();
       await engineer.page.getByRole('button', { name: 'Submit for review' }).waitFor({ state: 'detached' });
       await engineer.page.getByText('Waiting for a QA reviewer.').waitFor();
@@ -72,7 +74,7 @@ describe('process sheet from issue to signature', () => {
       // WCAG 2.1 AA (axe-core) on the sheet page and the list.
       expect(await wcagViolations(engineer.page)).toEqual([]);
       await engineer.page.goto('/sheets');
-      await engineer.page.getByRole('link', { name: /LC-PS-\d{4} rev\. 1/ }).waitFor();
+      await engineer.page.getByRole('link', { name: `${number} rev. 1`, exact: true }).waitFor();
       expect(await wcagViolations(engineer.page)).toEqual([]);
       await screenshot(engineer.page, 'sheets-list');
       await engineer.context.close();
@@ -116,7 +118,7 @@ describe('process sheet from issue to signature', () => {
       await reviewer.page.goto('/verify');
       await reviewer.page.getByLabel('Process sheet PDF').setInputFiles(pdfPath);
       await reviewer.page.getByRole('button', { name: 'Verify' }).click();
-      await reviewer.page.getByText(/This is the signed PDF of LC-PS-\d{4} revision 1/).waitFor();
+      await reviewer.page.getByText(`This is the signed PDF of ${number} revision 1`).waitFor();
       await screenshot(reviewer.page, 'sheet-verify');
       expect(await wcagViolations(reviewer.page)).toEqual([]);
       await reviewer.context.close();
