@@ -45,7 +45,7 @@ type DemoCheck = Omit<LayerCheckInput, 'fluidId'> & { title: string; fluidName: 
 /**
  * The five demo checks. Margins (solver as committed) are given as what to expect, not as test
  * values: zone 1 Quiet (≈ 1.7, long-wave thinning below ≈ 39 µm), repair coat Over (surface-tension
- * cells), Caster B Close, silicone oil Close to its onset, weld root far over (melt pools always stir).
+ * cells), Caster B Close, silicone oil Close to its onset, weld root Over (a melt pool stirs).
  */
 export function demoCheckInputs(): DemoCheck[] {
   return [
