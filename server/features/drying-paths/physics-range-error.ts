@@ -26,7 +26,7 @@ export async function withPhysicsFieldErrorsAsync<T>(run: () => Promise<T>, pref
 
 /** The dotted field path a physics message starts with, or '_' when it names none. */
 export function fieldOf(message: string, prefix = ''): string {
-  const match = /^([A-Za-z_][\w]*(?:\[\d+\]|\.[A-Za-z_]\w*)*)\s/.exec(message);
+  const match = /^([A-Za-z_][\w]*(?:\[\d+\]|\.[A-Za-z_]\w*)*)\s(?:must|is|has|needs)\b/.exec(message);
   if (!match) return '_';
   const path = match[1].replace(/\[(\d+)\]/g, '.$1');
   return prefix ? `${prefix}.${path}` : path;

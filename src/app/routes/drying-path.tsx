@@ -1,5 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
+import type { DryingPathAnswer } from '../../../shared/schemas/drying-paths';
 import { Loading } from '../../components/ui/loading';
 import { Notice } from '../../components/ui/notice';
 import { PageHeader } from '../../components/ui/page-header';
@@ -25,6 +26,10 @@ function DryingPathPage() {
   const [submitted, setSubmitted] = useState(() => valuesToDryingInput(line2FormValues()));
   const path = useDryingPath(submitted);
   const errors = useMemo(() => (isApiError(path.error) ? (path.error.fields ?? {}) : {}), [path.error]);
+  // The last path that computed stays on screen while new inputs are refused.
+  const lastGood = useRef<DryingPathAnswer | undefined>(undefined);
+  if (path.data) lastGood.current = path.data;
+  const shown = path.data ?? lastGood.current;
 
   return (
     <>
@@ -38,10 +43,8 @@ function DryingPathPage() {
           <SaveDryingSetup input={submitted} canSave={me.role === 'engineer'} />
         </div>
         <div className="flex min-w-0 flex-col gap-5" aria-live="polite">
-          {path.isPending ? (
-            <Loading label="Computing the drying path…" />
-          ) : path.isError ? (
-            <Notice tone="error" title="The drying path could not be computed">
+          {path.isError && (
+            <Notice tone="error" title={shown ? 'These inputs could not be computed; the last drying path is shown' : 'The drying path could not be computed'}>
               {path.error.message}
               {Object.keys(errors).length > 0 && (
                 <ul className="mt-1 list-disc pl-5">
@@ -53,12 +56,15 @@ function DryingPathPage() {
                 </ul>
               )}
             </Notice>
-          ) : (
-            <>
-              <DryingResults answer={path.data} />
-              <DryingPlots answer={path.data} />
-            </>
           )}
+          {shown ? (
+            <>
+              <DryingResults answer={shown} />
+              <DryingPlots answer={shown} />
+            </>
+          ) : path.isPending ? (
+            <Loading label="Computing the drying path…" />
+          ) : null}
         </div>
       </div>
     </>

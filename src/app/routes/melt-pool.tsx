@@ -1,5 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent } from 'react';
+import type { MeltPoolAnswer } from '../../../shared/schemas/melt-pool';
 import { QuantityField } from '../../components/units/quantity-field';
 import { Button } from '../../components/ui/button';
 import { TextField } from '../../components/ui/field';
@@ -37,6 +38,9 @@ function MeltPoolPage() {
   const [submitted, setSubmitted] = useState(() => valuesToMeltPoolInput(weldCellFormValues()));
   const result = useMeltPool(submitted);
   const errors = isApiError(result.error) ? (result.error.fields ?? {}) : {};
+  const lastGood = useRef<MeltPoolAnswer | undefined>(undefined);
+  if (result.data) lastGood.current = result.data;
+  const shown = result.data ?? lastGood.current;
   const submit = (event: FormEvent) => {
     event.preventDefault();
     setSubmitted(valuesToMeltPoolInput(values));
@@ -65,23 +69,19 @@ function MeltPoolPage() {
           </div>
         </form>
         <div className="flex min-w-0 flex-col gap-5" aria-live="polite">
-          {result.isPending ? (
-            <Loading label="Computing the melt pool flow…" />
-          ) : result.isError && !result.data ? (
-            <Notice tone="error" title="The flow could not be computed">
+          {result.isError && (
+            <Notice tone="error" title={shown ? 'These inputs could not be computed; the last result is shown' : 'The flow could not be computed'}>
               {result.error.message}
             </Notice>
-          ) : result.data ? (
+          )}
+          {shown ? (
             <>
-              {result.isError && (
-                <Notice tone="error" title="The new inputs could not be computed; the last result is shown">
-                  {result.error.message}
-                </Notice>
-              )}
-              <MeltPoolResults answer={result.data} />
-              <SurfaceTensionCurve answer={result.data} />
-              <WeldingCautions cautions={result.data.cautions} />
+              <MeltPoolResults answer={shown} />
+              <SurfaceTensionCurve answer={shown} />
+              <WeldingCautions cautions={shown.cautions} />
             </>
+          ) : result.isPending ? (
+            <Loading label="Computing the melt pool flow…" />
           ) : null}
         </div>
       </div>

@@ -1,4 +1,4 @@
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LayerCheckSummary } from '../../../../shared/schemas/layer-checks';
 import type { Heat, HeatInput, MeltPoolAnswer, MeltPoolInputBody, MeltPoolSetup } from '../../../../shared/schemas/melt-pool';
 import { api } from '../../../lib/api-client';
@@ -10,7 +10,6 @@ export const useMeltPool = (input: MeltPoolInputBody | null) =>
     enabled: input !== null,
     staleTime: Infinity,
     retry: false,
-    placeholderData: keepPreviousData,
   });
 
 export const useHeats = () =>
