@@ -5,6 +5,7 @@ import { computeDryingPath } from '../../shared/physics/drying/compute-drying-pa
 import { demoLine2DryingInput } from '../../shared/physics/drying/demo-line-2';
 import { roleValues, type Role } from '../../shared/schemas/roles';
 import { dryingSheetSection } from '../../server/features/drying-paths/drying-sheet-section';
+import { latestDryingSetupOfRevision } from '../../server/features/drying-paths/drying-paths.service';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent } from './helpers/users';
 
@@ -180,6 +181,8 @@ describe('drying set-ups saved with a layer check revision', () => {
     const again = await engineer().post('/api/drying-paths/evaluate').send(one.body.input);
     expect(again.body.onset.verdict).toBe(res.body.summary.verdict);
 
+    expect((await latestDryingSetupOfRevision(ctx.db, dryingCheckId, 1))?.id).toBe(res.body.id);
+    expect(await latestDryingSetupOfRevision(ctx.db, dryingCheckId, 2)).toBeNull();
     const section = dryingSheetSection(one.body);
     expect(section.title).toBe('Drying path');
     expect(section.rows.map((r) => r.label)).toContain('Zone 3: solvent and fresh air');

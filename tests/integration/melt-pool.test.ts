@@ -2,6 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { roleValues, type Role } from '../../shared/schemas/roles';
+import { meltPoolSheetSection } from '../../server/features/melt-pool/melt-pool-sheet-section';
+import { latestMeltPoolSetupOfRevision } from '../../server/features/melt-pool/melt-pool.service';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent } from './helpers/users';
 
@@ -155,6 +157,12 @@ describe('heats register and joined heats', () => {
 
     const list = await agents.get('reviewer')!.get(`/api/layer-checks/${meltCheckId}/melt-pool`);
     expect(list.body.items[0]).toMatchObject({ id: res.body.id, firstHeat: { heatNumber: `J-${tag}-low` }, secondHeat: { heatNumber: `J-${tag}-high` } });
+    // The process sheet section comes from the stored set-up of the check revision.
+    const stored = await latestMeltPoolSetupOfRevision(ctx.db, meltCheckId, 1);
+    const section = meltPoolSheetSection(stored!);
+    expect(section.rows.map((r) => r.value)).toContain(`J-${tag}-high: 120 ppm S, flow inward at 1955 K`);
+    expect(section.cautions.join(' ')).toMatch(/hexavalent chromium/);
+
     // A heat used by a set-up stays in the register.
     expect((await engineer().delete(`/api/heats/${low.id}`)).status).toBe(409);
     // The same heat twice, an unknown heat, or a check of another process kind are refused (422).

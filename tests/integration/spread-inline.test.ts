@@ -3,6 +3,7 @@ import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { roleValues, type Role } from '../../shared/schemas/roles';
 import { spreadSheetSection } from '../../server/features/property-spreads/spread-sheet-section';
+import { latestFinishedSpreadOfRevision } from '../../server/features/property-spreads/property-spreads.service';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent } from './helpers/users';
 
@@ -106,6 +107,7 @@ describe('POST /api/layer-checks/:id/spreads (inline, ≤ 10 000 samples)', () =
 
   it('gives the process sheet section from the stored result', async () => {
     const res = await engineer().post(`/api/layer-checks/${checkId}/spreads`).send({ samples: 1000, seed: 5, uncertainties: deltaTOnly });
+    expect((await latestFinishedSpreadOfRevision(ctx.db, checkId, 1))?.id).toBe(res.body.id);
     const section = spreadSheetSection(res.body);
     expect(section.rows.find((r) => r.label.startsWith('Probability of onset'))?.value).toMatch(/95 % interval/);
     expect(section.rows.find((r) => r.label === 'Moves the margin most')?.value).toMatch(/^Temperature difference/);

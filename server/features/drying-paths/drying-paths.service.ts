@@ -89,3 +89,13 @@ export async function getDryingSetup(db: DbOrTx, id: string): Promise<DryingSetu
   if (!row) throw new NotFoundError('There is no drying set-up with this id.');
   return toDryingSetup(row.setup, row.createdByName);
 }
+
+/**
+ * The newest drying set-up saved with a given revision of a check, or null (for the process sheet:
+ * pass its summary to dryingSheetSection).
+ */
+export async function latestDryingSetupOfRevision(db: DbOrTx, checkId: string, revision: number): Promise<DryingSetup | null> {
+  const rows = await findDryingSetupsOfCheck(db, checkId);
+  const row = rows.find((r) => r.setup.revision === revision);
+  return row ? toDryingSetup(row.setup, row.createdByName) : null;
+}

@@ -1,4 +1,4 @@
-import { desc, eq } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { compareJoinedPartSulfur } from '../../../shared/physics/melt-pool/compare-joined-part-sulfur';
 import type { Heat, JoinedHeatsComparison, MeltPoolInputParsed, MeltPoolSetup, MeltPoolAnswer } from '../../../shared/schemas/melt-pool';
 import type { CurrentUser } from '../../auth/current-user';
@@ -107,6 +107,17 @@ export async function listMeltPoolSetups(db: DbOrTx, checkId: string): Promise<M
   await findCheckAtRevision(db, checkId);
   const rows = await db.select().from(meltPoolSetups).where(eq(meltPoolSetups.checkId, checkId)).orderBy(desc(meltPoolSetups.createdAt)).limit(100);
   return Promise.all(rows.map((r) => toSetup(db, r)));
+}
+
+/** The newest melt-pool set-up of a given revision of a check, or null (for the process sheet: meltPoolSheetSection). */
+export async function latestMeltPoolSetupOfRevision(db: DbOrTx, checkId: string, revision: number): Promise<MeltPoolSetup | null> {
+  const [row] = await db
+    .select()
+    .from(meltPoolSetups)
+    .where(and(eq(meltPoolSetups.checkId, checkId), eq(meltPoolSetups.revision, revision)))
+    .orderBy(desc(meltPoolSetups.createdAt))
+    .limit(1);
+  return row ? toSetup(db, row) : null;
 }
 
 export { evaluateMeltPool };

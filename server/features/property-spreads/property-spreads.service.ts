@@ -168,3 +168,12 @@ export async function listPropertySpreads(db: DbOrTx, checkId: string): Promise<
   await findCheckAtRevision(db, checkId);
   return (await findSpreadsOfCheck(db, checkId)).map(toPropertySpread);
 }
+
+/**
+ * The newest finished Property spread of a given revision of a check, or null (for the process
+ * sheet: pass it to spreadSheetSection).
+ */
+export async function latestFinishedSpreadOfRevision(db: DbOrTx, checkId: string, revision: number): Promise<PropertySpread | null> {
+  const row = (await findSpreadsOfCheck(db, checkId)).find((r) => r.revision === revision && r.status === 'done');
+  return row ? toPropertySpread(row) : null;
+}
