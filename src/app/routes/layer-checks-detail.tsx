@@ -36,6 +36,7 @@ import { useUnitSystem } from '../../lib/unit-system';
 import { formatDateTime } from '../../utils/format';
 import { roleLabels } from '../../../shared/schemas/roles';
 import { RoleGate } from '../role-gate';
+import { IssueSheetLink } from '../../features/sheets/components/issue-sheet-link';
 import { hasRole } from '../route-access';
 import { useDocumentTitle } from '../use-document-title';
 import { RouteError } from './route-error';
@@ -145,6 +146,7 @@ function LayerCheckEditor({ check: loaded, fluids, canWrite, roleLabel, initialF
         actions={
           <>
             <UnitSystemSelect />
+            {check && canWrite && <IssueSheetLink checkId={check.id} role="engineer" />}
             {canWrite && (
               <Button onClick={() => void save()} busy={create.isPending || update.isPending} data-testid="save-check">
                 {check ? 'Save new revision' : 'Save check'}
