@@ -1,3 +1,4 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState, type FormEvent } from 'react';
 import { LAYER_SPREAD_FIELDS } from '../../../../shared/physics/spread/layer-margin-evaluator';
 import { INLINE_SPREAD_LIMIT, spreadFieldLabels, type PropertySpread, type SpreadField, type SpreadUncertaintyInput } from '../../../../shared/schemas/property-spreads';
@@ -97,6 +98,12 @@ export function PropertySpreadSection({ checkId, canRun }: { checkId: string; ca
   const currentId = shownId ?? history.data?.items[0]?.id ?? null;
   const shown = useSpread(currentId);
   const fields = isApiError(run.error) ? (run.error.fields ?? {}) : {};
+  const client = useQueryClient();
+  const shownStatus = shown.data?.status;
+  // When a queued run finishes, the list of runs shows its result too.
+  useEffect(() => {
+    if (shownStatus === 'done' || shownStatus === 'failed') void client.invalidateQueries({ queryKey: ['property-spreads', 'list', checkId] });
+  }, [shownStatus, checkId, client]);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
