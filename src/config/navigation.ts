@@ -24,6 +24,7 @@ export const navigation: readonly NavItem[] = [
   { label: 'Melt pool flow', to: paths.meltPool, roles: roleValues },
   { label: 'Process sheets', to: paths.sheets, roles: roleValues },
   { label: 'Verify a PDF', to: paths.verify, roles: roleValues },
+  { label: 'Gauge log', to: paths.gauge, roles: roleValues },
   { label: 'Users', to: paths.adminUsers, roles: ['administrator'] },
   { label: 'Audit trail', to: paths.adminAudit, roles: ['administrator'] },
   { label: 'Outbox', to: paths.adminOutbox, roles: ['administrator'] },

@@ -16,6 +16,7 @@ export const paths = {
   meltPool: '/melt-pool',
   sheets: '/sheets',
   verify: '/verify',
+  gauge: '/gauge',
 } as const;
 
 /** The sign-in URL that returns to `next` afterwards. */
