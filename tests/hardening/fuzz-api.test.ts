@@ -263,6 +263,32 @@ describe('fuzzing every registered API route', () => {
     expect(failures).toEqual([]);
   }, 600_000);
 
+  it('CSV imports: arbitrary CSV text (quotes, separators, formulas, odd line ends) → never 5xx; a refused commit writes nothing', async () => {
+    // The export's own header (shared/schemas/fluids.ts fluidCsvColumns) and one good line, then spoiled.
+    const header = 'name,kind,reference_temperature,density,expansion,surface_tension,surface_tension_slope,conductivity,heat_capacity,viscosity_points';
+    const good = 'Fuzz solvent,solvent,20 °C,790 kg/m³,0.001 1/K,22 mN/m,-0.08 mN/(m·K),0.17 W/(m·K),2.4 kJ/(kg·K),20 °C = 1.2 mPa·s';
+    const cell = fc.oneof(hostileString, fc.constantFrom(...QUANTITY_SPOILERS), fc.constantFrom('"', '""', '"a,b"', ',', '\r', '\n', '\r\n', '\uFEFF', "'=1+2", '=1+2', 'solvent', '20 °C'));
+    const line = fc.array(cell, { minLength: 0, maxLength: 12 }).map((cells) => cells.join(','));
+    const csvText = fc.oneof(
+      fc.tuple(fc.array(line, { maxLength: 5 }), fc.constantFrom('\n', '\r\n', '\r')).map(([lines, end]) => [header, good, ...lines].join(end)),
+      fc.array(line, { minLength: 1, maxLength: 5 }).map((lines) => lines.join('\n')),
+      fc.string({ maxLength: 300 }),
+    );
+    const failures: Outcome[] = [];
+    for (const key of ['POST /api/fluids/import/preview', 'POST /api/fluids/import/commit']) {
+      const route = routeRegistry.get(key);
+      expect(route, key).toBeDefined();
+      await fc.assert(
+        fc.asyncProperty(csvText, async (csv) => {
+          const outcome = await sendOnce(route!, { param: '', query: '', body: JSON.stringify({ csv }) });
+          if (outcome.status < 0 || outcome.status >= 500) failures.push({ ...outcome, detail: `${JSON.stringify(csv).slice(0, 120)}: ${outcome.detail}` });
+        }),
+        { numRuns: RUNS_PER_ROUTE * 8, seed: 1_958, endOnFailure: true },
+      );
+    }
+    expect(failures).toEqual([]);
+  }, 600_000);
+
   it('refuses a JSON body over the 1 MB limit with 413 on every JSON route, writing nothing', async () => {
     const huge = JSON.stringify({ notes: 'x'.repeat(1_100_000) });
     const failures: Outcome[] = [];
