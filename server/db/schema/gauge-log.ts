@@ -82,9 +82,11 @@ export const gaugeReadings = pgTable(
     batchId: uuid('batch_id')
       .notNull()
       .references(() => gaugeBatches.id),
-    revisionId: uuid('revision_id')
-      .notNull()
-      .references(() => sheetRevisions.id),
+    /**
+     * Copied from the batch for filtering; no foreign key of its own (the batch's key already ties
+     * the reading to its revision, and a second per-row check would slow bulk imports).
+     */
+    revisionId: uuid('revision_id').notNull(),
     /** Order within the batch (file line or array index). */
     sequence: integer('sequence').notNull(),
     run: text('run').notNull(),
@@ -108,7 +110,6 @@ export const gaugeReadings = pgTable(
   (table) => [
     index('gauge_readings_revision_run_idx').on(table.revisionId, table.run, table.id),
     index('gauge_readings_revision_flag_idx').on(table.revisionId, table.flag, table.id),
-    index('gauge_readings_batch_idx').on(table.batchId),
   ],
 );
 
