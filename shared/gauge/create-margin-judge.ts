@@ -3,7 +3,7 @@ import type { LayerFields } from '../fluids/read-layer-input';
 import { pchipInterpolate } from '../physics/sizing/pchip-interpolate';
 import { parseQuantity } from '../units/parse-quantity';
 import { frozenFluidLaws, snapshotLayerFields, type GaugeSnapshot } from './snapshot-layer';
-import { snapshotMarginAt } from './snapshot-margin-at';
+import { snapshotOnsetAt } from './snapshot-margin-at';
 
 /** Substrate and air temperatures measured with a reading [K]; null when not measured. */
 export interface ReadingTemperatures {
@@ -53,6 +53,8 @@ interface Table {
   readonly logDepths: number[];
   readonly margins: number[];
   readonly logMargins: number[];
+  /** Whether long-wave thinning sets the margin at each node. */
+  readonly longWave: boolean[];
 }
 
 /**
@@ -65,16 +67,20 @@ interface Table {
  *    margin at one thickness is a direct solve (snapshotMarginAt).
  * 2. `points` thicknesses spaced evenly in ln d over [d₀/span, d₀·span] are solved once. Between
  *    nodes ln λ is interpolated against ln d by monotone piecewise cubic Hermite interpolation
- *    (PCHIP; the margins follow power laws in d, so ln λ is nearly linear in ln d). A segment
- *    with a node of infinite margin, and any thickness outside the table, is solved directly.
+ *    (PCHIP; the margins follow power laws in d, so ln λ is nearly linear in ln d). Where the most
+ *    dangerous mode changes between two nodes (cells ↔ long-wave thinning, a kink in λ(d)), each
+ *    mode's curve is extended from its own side and the lower value taken, as the solver takes the
+ *    minimum over modes. A segment with a node of infinite margin, and any thickness outside the
+ *    table, is solved directly.
  * 3. Temperatures: with plate and air temperatures and the check's top heat-transfer coefficient h,
  *    ΔT = (T_b − T_a)·Bi/(1 + Bi), Bi = h d/k, and the margin scales as 1/ΔT at fixed d (Ra and Ma
  *    are proportional to ΔT; Bi, Cr and Bo are not). So one table at T_b − T_a = ±1 K (per sign)
  *    serves every reading: λ(d, T_b, T_a) = λ₁(d)/|T_b − T_a|. A missing temperature is taken
  *    from the check when its heating gives it. Without h the temperatures cannot set the drive;
  *    the reading is judged at the check's heating (`temperaturesUsable` = false).
- * Accuracy (tests/…/create-margin-judge.test.ts against direct solves): relative error below
- * 1e-3 with 200 nodes over d/10 … 10 d for the layers tested.
+ * Accuracy against direct solves (create-margin-judge.test.ts, bench/gauge-import.bench.ts): relative
+ * error below 1e-4 asserted, about 1e-6 measured, with 200 nodes over d/10 … 10 d for the layers tested
+ * (flat Pearson layer; deformable primer film with buoyancy, plate and air, across the long-wave kink).
  *
  * ## References
  * - Fritsch F.N., Carlson R.E. (1980) SIAM J. Numer. Anal. 17(2):238–246 (monotone cubic interpolation).
@@ -100,13 +106,20 @@ export function createMarginJudge(snapshot: GaugeSnapshot, options: MarginJudgeO
   const logDepths = Array.from({ length: points }, (_, i) => lo + ((hi - lo) * i) / (points - 1));
   let solveCount = 0;
 
-  const solve = (thickness: number, heating?: LayerFields['heating']): number => {
+  const solveOnset = (thickness: number, heating?: LayerFields['heating']) => {
     solveCount += 1;
-    return snapshotMarginAt(fields, laws, thickness, heating);
+    return snapshotOnsetAt(fields, laws, thickness, heating);
   };
+  const solve = (thickness: number, heating?: LayerFields['heating']): number => solveOnset(thickness, heating).margin;
   const buildTable = (heating?: LayerFields['heating']): Table => {
-    const margins = logDepths.map((x) => solve(Math.exp(x), heating));
-    return { logDepths, margins, logMargins: margins.map((m) => (Number.isFinite(m) && m > 0 ? Math.log(m) : NaN)) };
+    const onsets = logDepths.map((x) => solveOnset(Math.exp(x), heating));
+    const margins = onsets.map((o) => o.margin);
+    return {
+      logDepths,
+      margins,
+      logMargins: margins.map((m) => (Number.isFinite(m) && m > 0 ? Math.log(m) : NaN)),
+      longWave: onsets.map((o) => o.longWave),
+    };
   };
 
   const base = buildTable();
@@ -119,12 +132,22 @@ export function createMarginJudge(snapshot: GaugeSnapshot, options: MarginJudgeO
       const a = table.margins[i];
       const b = table.margins[i + 1];
       if (!Number.isFinite(a) && !Number.isFinite(b) && a > 0 && b > 0) return Infinity;
-      if (Number.isFinite(table.logMargins[i]) && Number.isFinite(table.logMargins[i + 1])) {
-        // PCHIP on the unbroken run of finite nodes around the segment (at most 4 nodes are used).
+      const finite = (k: number) => k >= 0 && k < points && Number.isFinite(table.logMargins[k]);
+      if (table.longWave[i] !== table.longWave[i + 1] && finite(i - 1) && finite(i) && finite(i + 1) && finite(i + 2)) {
+        // The mode changes inside this segment (a kink, where long-wave thinning takes over from
+        // cells): each mode is smooth, so extend each side's own curve into the segment and take
+        // the lower, as the solver does (the margin is the minimum over modes).
+        const left = pchipInterpolate(table.logDepths.slice(Math.max(0, i - 2), i + 1), table.logMargins.slice(Math.max(0, i - 2), i + 1), x);
+        const right = pchipInterpolate(table.logDepths.slice(i + 1, Math.min(points, i + 4)), table.logMargins.slice(i + 1, Math.min(points, i + 4)), x);
+        return Math.exp(Math.min(left, right));
+      }
+      if (table.longWave[i] === table.longWave[i + 1] && Number.isFinite(table.logMargins[i]) && Number.isFinite(table.logMargins[i + 1])) {
+        // PCHIP on the finite nodes of the same mode around the segment (at most 4 nodes are used).
+        const same = (k: number) => Number.isFinite(table.logMargins[k]) && table.longWave[k] === table.longWave[i];
         let first = i;
-        while (first > 0 && first > i - 1 && Number.isFinite(table.logMargins[first - 1])) first -= 1;
+        while (first > 0 && first > i - 1 && same(first - 1)) first -= 1;
         let last = i + 1;
-        while (last < points - 1 && last < i + 2 && Number.isFinite(table.logMargins[last + 1])) last += 1;
+        while (last < points - 1 && last < i + 2 && same(last + 1)) last += 1;
         return Math.exp(pchipInterpolate(table.logDepths.slice(first, last + 1), table.logMargins.slice(first, last + 1), x));
       }
     }

@@ -30,6 +30,23 @@ import { onsetMargin } from '../physics/stability/onset-margin';
  * @example snapshotMarginAt(fields, laws, 0.5e-3) // 2 for a Pearson check set at onset at 1 mm
  */
 export function snapshotMarginAt(fields: LayerFields, laws: FluidLaws, thickness: number, heating?: LayerFields['heating']): number {
+  return snapshotOnsetAt(fields, laws, thickness, heating).margin;
+}
+
+/**
+ * {@link snapshotMarginAt} with the mode that sets the margin: `longWave` is true when the
+ * deformable surface's long-wave thinning is the most dangerous mode (always false for a check
+ * judged with a flat surface).
+ *
+ * @returns `{ margin, longWave }`; margin [-] is Infinity when no onset is possible
+ * @example snapshotOnsetAt(fields, laws, 30e-6).longWave // true below the long-wave kink
+ */
+export function snapshotOnsetAt(
+  fields: LayerFields,
+  laws: FluidLaws,
+  thickness: number,
+  heating?: LayerFields['heating'],
+): { margin: number; longWave: boolean } {
   if (!(thickness > 0) || !Number.isFinite(thickness)) throw new RangeError(`thickness must be > 0 m, got ${thickness}`);
   const read = readLayerInput({ ...fields, depth: `${thickness} m`, heating: heating ?? fields.heating }, laws);
   if (!read.ok) {
@@ -39,5 +56,5 @@ export function snapshotMarginAt(fields: LayerFields, laws: FluidLaws, thickness
   const layer = validatePhysicalLayer(read.value.layer);
   const onset = onsetMargin(layerStabilityProblem(layer, layerGroups(layer), { deformable: true }));
   const deformable = fields.top === 'surface' && fields.deformableSurface;
-  return deformable ? onset.margin : onset.cellMargin;
+  return deformable ? { margin: onset.margin, longWave: onset.longWave } : { margin: onset.cellMargin, longWave: false };
 }

@@ -43,7 +43,7 @@ import {
 
 const JUDGING_METHOD =
   'Each reading is judged with the signed sheet as released: the onset margin at the reading’s wet thickness is interpolated ' +
-  'from 200 direct solves of the stability problem between a tenth and ten times the released thickness (within 0.1 % of a direct solve), ' +
+  'from 200 direct solves of the stability problem between a tenth and ten times the released thickness (within 0.01 % of a direct solve), ' +
   'with the fluid properties frozen at the sheet’s evaluation temperature. Substrate and air temperatures change the drive when the check gives a top heat-transfer coefficient.';
 
 /** A revision that exists; `released` additionally requires it to be Signed (new readings go only there). */
