@@ -31,8 +31,9 @@ export function AppShell({ navItems, userMenu, children }: AppShellProps) {
           <Link to={paths.home} className="rounded-md py-1" aria-label="QuietLayer home">
             <BrandName />
           </Link>
-          <nav aria-label="Main" className="order-3 -mx-1 w-full overflow-x-auto md:order-none md:w-auto md:flex-1">
-            <ul className="flex gap-1">
+          {/* The navigation has its own row and wraps, so every entry stays visible on a plant-floor tablet. */}
+          <nav aria-label="Main" className="order-3 -mx-1 w-full">
+            <ul className="flex flex-wrap gap-1">
               {navItems.map((item) => (
                 <li key={item.to}>
                   <NavLink
