@@ -4,6 +4,7 @@ import { onsetMargin } from '../stability/onset-margin';
 import { regimeLabels } from '../stability/regime-labels';
 import { cellWavelength } from './cell-wavelength';
 import { hexagonSpacing } from './hexagon-spacing';
+import { createLayerDepthOnsets } from './layer-depth-onsets';
 import { layerGroups } from './layer-groups';
 import { layerStabilityProblem } from './layer-stability-problem';
 import { maxDeltaT } from './max-delta-t';
@@ -23,7 +24,9 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  *    same boundaries and Bi.
  * 4. Wavelength 2πd/k_c and hexagon spacing 4πd/(√3 k_c) of the flat cellular mode.
  * 5. maxStableDepth (ΔT held), minStableDepth (deformable surface), and the largest ΔT at this
- *    depth (margin × ΔT; at ΔT = 0 a reference of +1 K, heated from below, is used).
+ *    depth (margin × ΔT; at ΔT = 0 a reference of +1 K, heated from below, is used). The onset and
+ *    the two depth searches share their solved depths ({@link createLayerDepthOnsets}): a depth is
+ *    solved once, and each new depth starts its wavenumber search at the nearest solved one.
  *
  * ## References
  * - Pearson J. R. A. (1958) J. Fluid Mech. 4, 489–500. doi:10.1017/S0022112058000616
@@ -39,7 +42,11 @@ import { validatePhysicalLayer } from './validate-physical-layer';
 export function evaluateLayer(layer: PhysicalLayer, options: DepthSearchOptions = {}): LayerEvaluation {
   const checked = validatePhysicalLayer(layer);
   const groups = layerGroups(checked);
-  const onset = onsetMargin(layerStabilityProblem(checked, groups, { deformable: true }));
+  // One set of solved depths for the onset and both depth searches: each starts at the layer's own
+  // depth and warm-starts from the nearest depth any of them has solved.
+  const depthOnsets = createLayerDepthOnsets(checked);
+  const onset = depthOnsets.solve(checked.depth, { deformable: true });
+  const searchOptions = { ...options, depthOnsets };
   const boundaries = { bottom: checked.bottom, bottomThermal: checked.bottomThermal, top: checked.top, biot: groups.biot };
   const wavenumber = onset.cellWavenumber;
   let limits;
@@ -62,8 +69,8 @@ export function evaluateLayer(layer: PhysicalLayer, options: DepthSearchOptions 
     criticalWavenumber: wavenumber,
     wavelength: cellWavelength(checked.depth, wavenumber),
     hexagonSpacing: hexagonSpacing(checked.depth, wavenumber),
-    maxStableDepth: maxStableDepth(checked, options),
-    minStableDepth: minStableDepth(checked, options),
+    maxStableDepth: maxStableDepth(checked, searchOptions),
+    minStableDepth: minStableDepth(checked, searchOptions),
     maxDeltaT: limits,
   });
 }

@@ -1,9 +1,10 @@
 /** Sizing answers for a physical layer: evaluation, depth bounds, largest ΔT and the quiet window. */
 export { cellWavelength } from './cell-wavelength';
 export { evaluateLayer } from './evaluate-layer';
-export { findDepthCrossing, type DepthCrossingSearch } from './find-depth-crossing';
+export { DEPTH_TOLERANCE, findDepthCrossing, type DepthCrossingSearch } from './find-depth-crossing';
 export { findRootBrent, type RootResult } from './find-root-brent';
 export { hexagonSpacing } from './hexagon-spacing';
+export { createLayerDepthOnsets, type LayerDepthOnsets } from './layer-depth-onsets';
 export { layerGroups } from './layer-groups';
 export { layerStabilityProblem } from './layer-stability-problem';
 export { maxDeltaT } from './max-delta-t';

@@ -1,7 +1,6 @@
-import { onsetMargin } from '../stability/onset-margin';
 import { findDepthCrossing } from './find-depth-crossing';
-import { layerGroups } from './layer-groups';
-import { layerStabilityProblem } from './layer-stability-problem';
+import type { createLayerDepthOnsets } from './layer-depth-onsets';
+import { sharedDepthOnsets } from './shared-depth-onsets';
 import type { DepthBound, DepthSearchOptions, PhysicalLayer } from './types';
 import { validatePhysicalLayer } from './validate-physical-layer';
 
@@ -16,29 +15,25 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  * thermocapillarity with Bi = 0, d = Ma_c μκ/(|dσ/dT|ΔT). With ΔT = 0 (or a stabilising ΔT) there is
  * no onset at any depth and the answer is 'quiet-throughout-range'.
  *
+ * Solved depths are shared through `options.depthOnsets` and warm-started from the nearest solved
+ * depth ({@link createLayerDepthOnsets}); the root is found to 1e-5 relative on the depth.
+ *
  * ## References
  * - Chandrasekhar S. (1961) "Hydrodynamic and Hydromagnetic Stability", Oxford, ch. II.
  * - Pearson J. R. A. (1958) J. Fluid Mech. 4, 489–500. doi:10.1017/S0022112058000616
  * - Brent R. P. (1973) "Algorithms for Minimization without Derivatives", ch. 4.
  *
  * @param layer - physical layer (SI)
- * @param options - search range, default 1e-7–10 m
+ * @param options - search range, default 1e-7–10 m; `depthOnsets` to share solves with other searches
  * @returns frozen {@link DepthBound}: the depth [m], or why there is none in the range
  * @throws RangeError naming the field when the layer is invalid
  * @example maxStableDepth(layer) // { found: true, depth: 0.0021 } for a 10 K silicone-oil layer
  */
 export function maxStableDepth(layer: PhysicalLayer, options: DepthSearchOptions = {}): DepthBound {
   const checked = validatePhysicalLayer(layer);
-  let wavenumberHint: number | undefined;
+  const onsets = sharedDepthOnsets(checked, options.depthOnsets);
   return findDepthCrossing({
-    margin: (depth) => {
-      const atDepth = { ...checked, depth };
-      const problem = layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: false });
-      // Start the wavenumber search where the previous trial depth had its minimum (a hint only).
-      const result = onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
-      if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) wavenumberHint = result.cellWavenumber;
-      return result.cellMargin;
-    },
+    margin: (depth) => onsets.solve(depth, { deformable: false }).cellMargin,
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,
     maxDepth: options.maxDepth ?? 10,

@@ -1,7 +1,6 @@
-import { onsetMargin } from '../stability/onset-margin';
 import { findDepthCrossing } from './find-depth-crossing';
-import { layerGroups } from './layer-groups';
-import { layerStabilityProblem } from './layer-stability-problem';
+import type { createLayerDepthOnsets } from './layer-depth-onsets';
+import { sharedDepthOnsets } from './shared-depth-onsets';
 import type { DepthBound, DepthSearchOptions, PhysicalLayer } from './types';
 import { validatePhysicalLayer } from './validate-physical-layer';
 
@@ -16,12 +15,15 @@ import { validatePhysicalLayer } from './validate-physical-layer';
  * rises with depth: thin films are the ones that thin. The depth where λ*_LW = 1 is bracketed from
  * the layer's own depth and refined by Brent's method ({@link findDepthCrossing}).
  *
+ * Solved depths are shared through `options.depthOnsets` and warm-started from the nearest solved
+ * depth ({@link createLayerDepthOnsets}); the root is found to 1e-5 relative on the depth.
+ *
  * ## References
  * - VanHook S. J. et al. (1997) J. Fluid Mech. 345, 45–78. doi:10.1017/S0022112097006101
  * - Davis S. H. (1987) Annu. Rev. Fluid Mech. 19, 403–435. doi:10.1146/annurev.fl.19.010187.002155
  *
  * @param layer - physical layer (SI)
- * @param options - search range, default 1e-7–10 m
+ * @param options - search range, default 1e-7–10 m; `depthOnsets` to share solves with other searches
  * @returns frozen {@link DepthBound}; 'not-applicable' unless the top is 'surface'
  * @throws RangeError naming the field when the layer is invalid
  * @example minStableDepth(layer) // { found: true, depth: 1.2e-4 } for a thin oil film heated by 10 K
@@ -37,16 +39,9 @@ export function minStableDepth(layer: PhysicalLayer, options: DepthSearchOptions
       message: 'Only a free surface can deform, so there is no long-wave thinning limit for this top.',
     } as const);
   }
-  let wavenumberHint: number | undefined;
+  const onsets = sharedDepthOnsets(checked, options.depthOnsets);
   return findDepthCrossing({
-    margin: (depth) => {
-      const atDepth = { ...checked, depth };
-      const problem = layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable: true });
-      // Start the wavenumber search where the previous trial depth had its minimum (a hint only).
-      const result = onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
-      if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) wavenumberHint = result.cellWavenumber;
-      return result.longWaveMargin;
-    },
+    margin: (depth) => onsets.solve(depth, { deformable: true }).longWaveMargin,
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,
     maxDepth: options.maxDepth ?? 10,

@@ -1,3 +1,4 @@
+import type { LayerDepthOnsets } from './layer-depth-onsets';
 import type { CriticalValue, LayerBoundaries, OnsetResult, Regime } from '../stability/types';
 
 /**
@@ -77,6 +78,11 @@ export interface DepthSearchOptions {
   readonly minDepth?: number;
   /** Largest depth searched [m]; default 10. */
   readonly maxDepth?: number;
+  /**
+   * Solved depths of this same layer to share with other depth searches ({@link LayerDepthOnsets});
+   * ignored when made for a different layer. Default: a fresh set for this search.
+   */
+  readonly depthOnsets?: LayerDepthOnsets;
 }
 
 /** Largest temperature drops before onset at the layer's depth (signed like deltaT) [K]. */
