@@ -7,6 +7,7 @@ export default defineConfig({
     include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.ts'],
     exclude: ['**/node_modules/**', 'dist/**', '.data/**'],
     globalSetup: ['tests/setup/global-setup.ts'],
+    setupFiles: ['tests/setup/fast-check-seed.ts'],
     pool: 'forks',
     maxWorkers: 2,
     testTimeout: 30_000,

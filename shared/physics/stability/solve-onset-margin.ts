@@ -79,6 +79,16 @@ export function solveOnsetMargin(
       margin = deformable.factor;
       wavenumber = deformable.wavenumber;
     }
+    // A deformable surface never makes the layer more stable than the flat one, so the most
+    // dangerous margin is never above cellMargin. Where the separate solves disagree in the last
+    // digits (seen only at margins near the top of double precision), keep the flat cellular answer.
+    if (margin > cell.factor) {
+      margin = cell.factor;
+      wavenumber = cell.wavenumber;
+      longWave = false;
+      modeProblem = flat;
+    }
+
   }
 
   const finite = Number.isFinite(margin);
