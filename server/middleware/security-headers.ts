@@ -51,7 +51,8 @@ export function contentSecurityPolicyDirectives(env: Pick<Env, 'PUBLIC_URL'>): R
     'script-src': ["'self'"],
     'script-src-attr': ["'none'"],
     'style-src': ["'self'", EMPTY_STYLE_HASH, PLOT_MAP_STYLE_HASH],
-    'style-src-attr': ["'unsafe-hashes'", ...PLOT_TEXT_TAG_STYLES.map(sha256Source)],
+    // The empty declaration too: the plot's colour bar writes style="" on its elements.
+    'style-src-attr': ["'unsafe-hashes'", EMPTY_STYLE_HASH, ...PLOT_TEXT_TAG_STYLES.map(sha256Source)],
     // data: for the plot's "download as PNG" and small inline SVG icons; blob: for exported files.
     'img-src': ["'self'", 'data:', 'blob:'],
     'font-src': ["'self'"],
