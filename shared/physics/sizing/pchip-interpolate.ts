@@ -15,7 +15,7 @@
  *   Anal. 17(2), 238–246. doi:10.1137/0717021
  * - Hyman J. M. (1983) "Accurate monotonicity preserving cubic interpolation", SIAM J. Sci. Stat.
  *   Comput. 4(4), 645–654. doi:10.1137/0904045
- * - Moler C. B. (2004) "Numerical Computing with MATLAB", SIAM, §3.4 (end slopes).
+ * - Fritsch F. N., Butland J. (1984) "A method for constructing local monotone piecewise cubic interpolants", SIAM J. Sci. Stat. Comput. 5(2):300–304 (weighted harmonic-mean slopes; the one-sided end slopes keep the same shape-preserving limits).
  *
  * @param xs - node abscissae, strictly increasing, at least 2
  * @param ys - node values, finite, same length as xs

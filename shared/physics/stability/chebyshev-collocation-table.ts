@@ -21,7 +21,7 @@ const GRIDS = new Map<number, ChebyshevCollocation>();
  * Looks the order up; on a miss builds it with chebyshevCollocation and keeps it.
  *
  * ## References
- * - Trefethen, L. N. (2000) *Spectral Methods in MATLAB*, SIAM, ch. 6. doi:10.1137/1.9780898719598
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover, ch. 6. 
  *
  * @param order - polynomial order N [-], integer ≥ 4
  * @returns the shared grid (treat as read-only)

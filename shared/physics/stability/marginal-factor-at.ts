@@ -56,7 +56,7 @@ const NEGLIGIBLE_DRIVE = 1e-13;
  * - Davis, S. H. (1987) "Thermocapillary instabilities", Annu. Rev. Fluid Mech. 19, 403–435.
  *   doi:10.1146/annurev.fl.19.010187.002155
  * - VanHook, S. J. et al. (1997) J. Fluid Mech. 345, 45–78. doi:10.1017/S0022112097006101
- * - Trefethen, L. N. (2000) Spectral Methods in MATLAB, SIAM (collocation, row replacement).
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover (collocation, row replacement).
  *
  * @param problem - checked problem (see validateProblem)
  * @param grid - collocation grid (see chebyshevCollocation)
