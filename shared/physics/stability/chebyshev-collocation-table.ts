@@ -21,7 +21,7 @@ const GRIDS = new Map<number, ChebyshevCollocation>();
  * Looks the order up; on a miss builds it with chebyshevCollocation and keeps it.
  *
  * ## References
- * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover, ch. 6. 
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover.
  *
  * @param order - polynomial order N [-], integer ≥ 4
  * @returns the shared grid (treat as read-only)

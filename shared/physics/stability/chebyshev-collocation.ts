@@ -21,8 +21,7 @@ export interface ChebyshevCollocation {
  * Higher derivatives are matrix powers. Spectrally accurate for smooth fields.
  *
  * ## References
- * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover, ch. 6 (Chebyshev differentiation matrices).
- *   
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover (Chebyshev differentiation matrices).
  * - Baltensperger, R. & Trummer, M. R. (2003) "Spectral differencing with a twist",
  *   SIAM J. Sci. Comput. 24, 1465–1487 (negative-sum diagonal). doi:10.1137/S1064827501388182
  *

@@ -24,7 +24,7 @@ export interface CollocationWorkspace {
  * createMarginalFactorEvaluator), never shared between callers; every call overwrites what it uses.
  *
  * ## References
- * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover, ch. 6–7 (collocation operators).
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover (collocation operators).
  *
  * @param size - number of collocation nodes n [-], integer ≥ 5
  * @returns fresh zeroed arrays

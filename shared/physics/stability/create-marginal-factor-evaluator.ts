@@ -24,7 +24,7 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
  * curves of this solver (checked by raising the order), then calls marginalFactorAt.
  *
  * ## References
- * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover, ch. 6–7 (spectral convergence).
+ * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover (spectral convergence).
  *
  * @param problem - checked problem (see validateProblem)
  * @returns function of the wavenumber k [1/d] > 0 giving λ(k) [-] (Infinity when no stationary mode)
