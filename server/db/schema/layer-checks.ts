@@ -34,8 +34,12 @@ export const layerChecks = pgTable(
   (table) => [
     index('layer_checks_updated_at_idx').on(table.updatedAt),
     index('layer_checks_title_lower_idx').on(sql`lower(${table.title})`),
+    // Title search is ILIKE '%…%'; a trigram index answers it (and its count) without reading every row.
+    // pg_trgm is created by migration 0009.
+    index('layer_checks_title_trgm_idx').using('gin', table.title.op('gin_trgm_ops')),
     index('layer_checks_fluid_idx').on(table.fluidId),
     index('layer_checks_process_kind_idx').on(table.processKind, table.updatedAt),
+    index('layer_checks_owner_idx').on(table.ownerId, table.updatedAt),
     index('layer_checks_depth_idx').on(table.depthSi),
     index('layer_checks_margin_idx').on(table.savedMargin),
   ],

@@ -1,0 +1,2 @@
+CREATE INDEX "layer_checks_title_trgm_idx" ON "layer_checks" USING gin ("title" gin_trgm_ops);--> statement-breakpoint
+CREATE INDEX "layer_checks_owner_idx" ON "layer_checks" USING btree ("owner_id","updated_at");
