@@ -1,4 +1,7 @@
+import { flatCellularMinimum } from '../stability/cellular-margin';
+import { longWaveMargin as longWaveMarginOf } from '../stability/long-wave-margin';
 import { onsetMargin } from '../stability/onset-margin';
+import { validateProblem } from '../stability/validate-problem';
 import type { OnsetResult } from '../stability/types';
 import { layerGroups } from './layer-groups';
 import { layerStabilityProblem } from './layer-stability-problem';
@@ -10,7 +13,17 @@ export interface LayerDepthOnsets {
   readonly layer: PhysicalLayer;
   /** Onset result at `depth` [m], flat surface or (on a 'surface' top) deformable; solved at most once per depth and kind. */
   readonly solve: (depth: number, options: { deformable: boolean }) => OnsetResult;
-  /** Number of onset solves done so far (for profiling and benchmarks). */
+  /**
+   * Flat-surface cellular margin alone at `depth` [m] (OnsetResult.cellMargin) [-]: taken from a full
+   * solve at that depth when there is one, else solved by itself (the largest-quiet-depth search).
+   */
+  readonly cellMargin: (depth: number) => number;
+  /**
+   * Long-wave margin alone at `depth` [m] (OnsetResult.longWaveMargin of the deformable problem) [-];
+   * Infinity unless the top is a 'surface'. From a full deformable solve when there is one.
+   */
+  readonly longWaveMargin: (depth: number) => number;
+  /** Number of solves done so far, full and single-mode (for profiling and benchmarks). */
   readonly solveCount: () => number;
 }
 
@@ -26,6 +39,12 @@ export interface LayerDepthOnsets {
  * solved depth nearest in ln d, because k_c moves slowly with depth (it depends on d only through Bi,
  * Cr and Bo and the Ra/Ma mix); the hint only seeds the search, and the solver falls back to a full
  * scan, so the answer matches a cold solve to 1e-6 relative.
+ *
+ * A depth search needs one number per depth, not the whole OnsetResult: the largest quiet depth
+ * follows the flat cellular margin, the smallest the long-wave margin. `cellMargin` and
+ * `longWaveMargin` solve only that mode (flatCellularMinimum: one wavenumber search instead of
+ * three plus the buoyancy share; longWaveMargin: two λ evaluations instead of about twenty) and give
+ * the same value as the full solve, which they reuse when it exists at that depth.
  *
  * ## References
  * - Pearson J. R. A. (1958) J. Fluid Mech. 4, 489–500 (k_c ≈ 2 across Bi: a slowly varying minimum).
@@ -51,23 +70,51 @@ export function createLayerDepthOnsets(layer: PhysicalLayer): LayerDepthOnsets {
     }
     return best;
   };
+  const remember = (logDepth: number, cellWavenumber: number) => {
+    // NaN or 0 (no cellular minimum) would be refused as a hint: leave such depths out.
+    if (Number.isFinite(cellWavenumber) && cellWavenumber > 0) hints.push({ logDepth, wavenumber: cellWavenumber });
+  };
+  const problemAt = (depth: number, deformable: boolean) => {
+    const atDepth = { ...layer, depth };
+    return layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable });
+  };
   const solve = (depth: number, options: { deformable: boolean }): OnsetResult => {
     const deformable = options.deformable && layer.top === 'surface';
     const key = `${deformable ? 'd' : 'f'}${depth}`;
     const known = solved.get(key);
     if (known) return known;
-    const atDepth = { ...layer, depth };
-    const problem = layerStabilityProblem(atDepth, layerGroups(atDepth), { deformable });
     const logDepth = Math.log(depth);
     const wavenumberHint = nearestHint(logDepth);
-    const result = onsetMargin(problem, wavenumberHint === undefined ? {} : { wavenumberHint });
+    const result = onsetMargin(problemAt(depth, deformable), wavenumberHint === undefined ? {} : { wavenumberHint });
     count += 1;
     solved.set(key, result);
-    // NaN or 0 (no cellular minimum) would be refused as a hint: leave such depths out.
-    if (Number.isFinite(result.cellWavenumber) && result.cellWavenumber > 0) {
-      hints.push({ logDepth, wavenumber: result.cellWavenumber });
-    }
+    remember(logDepth, result.cellWavenumber);
     return result;
   };
-  return Object.freeze({ layer, solve, solveCount: () => count });
+  const cells = new Map<number, number>();
+  const cellMargin = (depth: number): number => {
+    const full = solved.get(`f${depth}`) ?? solved.get(`d${depth}`);
+    if (full) return full.cellMargin;
+    const known = cells.get(depth);
+    if (known !== undefined) return known;
+    const logDepth = Math.log(depth);
+    const cell = flatCellularMinimum(validateProblem(problemAt(depth, false)), nearestHint(logDepth));
+    count += 1;
+    cells.set(depth, cell.factor);
+    remember(logDepth, Number.isFinite(cell.factor) ? cell.wavenumber : NaN);
+    return cell.factor;
+  };
+  const longWaves = new Map<number, number>();
+  const longWaveMargin = (depth: number): number => {
+    if (layer.top !== 'surface') return Infinity;
+    const full = solved.get(`d${depth}`);
+    if (full) return full.longWaveMargin;
+    const known = longWaves.get(depth);
+    if (known !== undefined) return known;
+    const margin = longWaveMarginOf(validateProblem(problemAt(depth, true)));
+    count += 1;
+    longWaves.set(depth, margin);
+    return margin;
+  };
+  return Object.freeze({ layer, solve, cellMargin, longWaveMargin, solveCount: () => count });
 }

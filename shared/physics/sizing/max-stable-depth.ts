@@ -33,7 +33,7 @@ export function maxStableDepth(layer: PhysicalLayer, options: DepthSearchOptions
   const checked = validatePhysicalLayer(layer);
   const onsets = sharedDepthOnsets(checked, options.depthOnsets);
   return findDepthCrossing({
-    margin: (depth) => onsets.solve(depth, { deformable: false }).cellMargin,
+    margin: (depth) => onsets.cellMargin(depth),
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,
     maxDepth: options.maxDepth ?? 10,

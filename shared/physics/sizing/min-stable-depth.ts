@@ -41,7 +41,7 @@ export function minStableDepth(layer: PhysicalLayer, options: DepthSearchOptions
   }
   const onsets = sharedDepthOnsets(checked, options.depthOnsets);
   return findDepthCrossing({
-    margin: (depth) => onsets.solve(depth, { deformable: true }).longWaveMargin,
+    margin: (depth) => onsets.longWaveMargin(depth),
     startDepth: checked.depth,
     minDepth: options.minDepth ?? 1e-7,
     maxDepth: options.maxDepth ?? 10,

@@ -2,6 +2,7 @@ import { buoyancyShare } from './buoyancy-share';
 import { classifyRegime } from './classify-regime';
 import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
 import { criticalFactor } from './critical-factor';
+import { flatCellularMinimum } from './cellular-margin';
 import { longWaveLimit } from './long-wave-limit';
 import type { OnsetResult, StabilityProblem } from './types';
 import type { CheckedProblem } from './validate-problem';
@@ -29,7 +30,7 @@ export interface OnsetSolution {
  * and onsetMarginSweep after validation).
  *
  * ## Method
- * 1. Flat cellular problem: criticalFactor (bracket around hints.cell, else the coarse scan).
+ * 1. Flat cellular problem: flatCellularMinimum (bracket around hints.cell, else the coarse scan).
  * 2. Deformable surface: long-wave limit (longWaveLimit) and the deformable cellular minimum
  *    (bracket around the flat k_c times hints.deformableRatio); the lower of the two is the mode.
  * 3. buoyancyShare and classifyRegime at the onset mode. Full description in onsetMargin.
@@ -51,7 +52,7 @@ export function solveOnsetMargin(
   hints: OnsetSearchHints,
 ): OnsetSolution {
   const flat = checked.crispation > 0 ? { ...checked, crispation: 0 } : checked;
-  const cell = criticalFactor(flat, createMarginalFactorEvaluator(flat), { wavenumberHint: hints.cell });
+  const cell = flatCellularMinimum(checked, hints.cell);
 
   let margin = cell.factor;
   let wavenumber = cell.wavenumber;
