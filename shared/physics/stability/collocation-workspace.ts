@@ -20,8 +20,9 @@ export interface CollocationWorkspace {
  * ## Method
  * n×n arrays for the thermal and mechanical operators, the right-hand sides (at most n − 3
  * columns: the tangential-stress row and the n − 4 interior rows) and the reduced matrix; length-n
- * vectors for the deflection functional and the eigenvalues. Owned by one evaluator closure (see
- * createMarginalFactorEvaluator), never shared between callers; every call overwrites what it uses.
+ * vectors for the deflection functional and the eigenvalues. One set per collocation order is shared
+ * by every evaluator (see createMarginalFactorEvaluator): the kernel is synchronous and every call
+ * overwrites what it uses before reading it.
  *
  * ## References
  * - Boyd, J. P. (2001) *Chebyshev and Fourier Spectral Methods*, 2nd ed., Dover (collocation operators).

@@ -14,9 +14,28 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
 ];
 
 /**
+ * Scratch arrays of the kernel, one set per collocation order, shared by every evaluator.
+ *
+ * Sharing is safe: marginalFactorAt is synchronous and never re-entered, it overwrites every array
+ * it reads before reading it (so nothing carries from one call to the next), and each worker thread
+ * has its own module instance. Building fresh arrays for every evaluator cost about a tenth of a
+ * whole onset solve (an onset builds three or four evaluators); keeping one set removes that.
+ */
+const SCRATCH = new Map<number, CollocationWorkspace>();
+
+function scratchFor(order: number): CollocationWorkspace {
+  let workspace = SCRATCH.get(order);
+  if (workspace === undefined) {
+    workspace = createCollocationWorkspace(order + 1);
+    SCRATCH.set(order, workspace);
+  }
+  return workspace;
+}
+
+/**
  * Build λ(k) for one checked problem. The collocation grids come from the shared read-only table
- * (chebyshevCollocationTable), so building an evaluator costs nothing; the scratch arrays of the
- * kernel are kept in the returned closure per order (nothing is kept between calls of this function).
+ * (chebyshevCollocationTable) and the kernel's scratch arrays from the shared set above, so building
+ * an evaluator costs nothing and repeated λ(k) allocate nothing.
  *
  * ## Method
  * Chooses the Chebyshev order from the wavenumber (12 nodes + 1 up to k = 4, rising to 36 for
@@ -31,8 +50,6 @@ const ORDER_BANDS: readonly (readonly [number, number])[] = [
  * @example createMarginalFactorEvaluator(validateProblem({bottom:'free',bottomThermal:'conducting',top:'free',biot:Infinity,rayleigh:1,marangoni:0}))(Math.PI / Math.SQRT2) // ≈ 657.511
  */
 export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenumber: number) => number {
-  // Scratch arrays per collocation order, owned by this closure (so repeated λ(k) allocate nothing).
-  const workspaces = new Map<number, CollocationWorkspace>();
   return (wavenumber: number): number => {
     let order = ORDER_BANDS[ORDER_BANDS.length - 1][1];
     for (const [limit, bandOrder] of ORDER_BANDS) {
@@ -41,11 +58,6 @@ export function createMarginalFactorEvaluator(problem: CheckedProblem): (wavenum
         break;
       }
     }
-    let workspace = workspaces.get(order);
-    if (workspace === undefined) {
-      workspace = createCollocationWorkspace(order + 1);
-      workspaces.set(order, workspace);
-    }
-    return marginalFactorAt(problem, chebyshevCollocationTable(order), wavenumber, workspace);
+    return marginalFactorAt(problem, chebyshevCollocationTable(order), wavenumber, scratchFor(order));
   };
 }

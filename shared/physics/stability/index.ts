@@ -2,7 +2,8 @@
  * Linear stability solver of QuietLayer: stationary onset of buoyancy and thermocapillary
  * convection in a horizontal liquid layer, flat or deformable surface. Pure functions; the only
  * module-level data is the lazily built, read-only table of collocation grids
- * (chebyshev-collocation-table.ts), which no caller can observe.
+ * (chebyshev-collocation-table.ts) and one set of scratch arrays per grid that every call
+ * overwrites before use (create-marginal-factor-evaluator.ts); no caller can observe either.
  *
  * - marginalFactor(problem, wavenumber): λ(k)
  * - neutralCurve(problem, options)
