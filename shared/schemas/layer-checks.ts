@@ -176,6 +176,8 @@ export const layerCheckListQuerySchema = pageQuerySchema.extend({
   q: z.string().trim().max(200, 'q must be at most 200 characters').optional(),
   processKind: processKindSchema.optional(),
   fluidId: z.uuid().optional(),
+  /** Only the checks this person owns (the client sends its own id for "Mine only"). */
+  ownerId: z.uuid({ error: 'ownerId must be a user id' }).optional(),
   sort: z.enum(layerCheckSortValues).default('updatedAt'),
   dir: z.enum(['asc', 'desc']).default('desc'),
 });

@@ -207,6 +207,34 @@ describe('layer checks: create, revise, conflict, permissions', () => {
     expect(res.body.items.map((c: { title: string }) => c.title)).toEqual([`${tag}-a`, `${tag}-c`]);
   });
 
+  it('lists only one owner\'s checks with ownerId, and refuses an ownerId that is not a user id', async () => {
+    const tag = `zz-owner-${Date.now()}`;
+    const ann = await createTestUser(ctx.db, { role: 'engineer', label: 'ann' });
+    const ben = await createTestUser(ctx.db, { role: 'engineer', label: 'ben' });
+    const annAgent = await signedInAgent(ctx.app, ann);
+    const benAgent = await signedInAgent(ctx.app, ben);
+    expect((await annAgent.post('/api/layer-checks').send(pearsonCheck({ title: `${tag}-ann-1` }))).status).toBe(201);
+    expect((await annAgent.post('/api/layer-checks').send(pearsonCheck({ title: `${tag}-ann-2` }))).status).toBe(201);
+    expect((await benAgent.post('/api/layer-checks').send(pearsonCheck({ title: `${tag}-ben-1` }))).status).toBe(201);
+
+    const all = await engineer().get('/api/layer-checks').query({ q: tag, sort: 'title', dir: 'asc' });
+    expect(all.body.total).toBe(3);
+    const anns = await benAgent.get('/api/layer-checks').query({ q: tag, ownerId: ann.id, sort: 'title', dir: 'asc' });
+    expect(anns.status).toBe(200);
+    expect(anns.body.total).toBe(2);
+    expect(anns.body.items.map((c: { title: string; ownerName: string }) => [c.title, c.ownerName])).toEqual([
+      [`${tag}-ann-1`, ann.displayName],
+      [`${tag}-ann-2`, ann.displayName],
+    ]);
+    const nobody = await engineer().get('/api/layer-checks').query({ q: tag, ownerId: '00000000-0000-4000-8000-000000000000' });
+    expect(nobody.status).toBe(200);
+    expect(nobody.body.total).toBe(0);
+
+    const bad = await engineer().get('/api/layer-checks').query({ ownerId: 'me' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.ownerId).toMatch(/user id/);
+  });
+
   it('draws the quiet window of a saved check with its boundary at Pearson onset', async () => {
     const created = (await engineer().post('/api/layer-checks').send(pearsonCheck({ title: `Window ${Date.now()}` }))).body;
     const res = await engineer().get(`/api/layer-checks/${created.id}/window`).query({ points: 10, depthMin: '0.5 mm', depthMax: '2 mm', driveMax: '2 K' });

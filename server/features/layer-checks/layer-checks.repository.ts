@@ -29,6 +29,7 @@ export async function findCheckPage(db: DbOrTx, query: z.output<typeof layerChec
   const conditions: SQL[] = [];
   if (query.processKind) conditions.push(eq(layerChecks.processKind, query.processKind));
   if (query.fluidId) conditions.push(eq(layerChecks.fluidId, query.fluidId));
+  if (query.ownerId) conditions.push(eq(layerChecks.ownerId, query.ownerId));
   if (query.q) conditions.push(ilike(layerChecks.title, `%${escapeLike(query.q)}%`));
   const where = conditions.length > 0 ? and(...conditions) : undefined;
   const column = sortColumns[query.sort];

@@ -18,7 +18,7 @@ import { queryClient } from '../../lib/query-client';
 import { useUnitSystem } from '../../lib/unit-system';
 import { readPage, readText, withParams } from '../../utils/search-params';
 import { RoleGate } from '../role-gate';
-import { hasRole } from '../route-access';
+import { requireMe } from '../route-access';
 import { useDocumentTitle } from '../use-document-title';
 import { RouteError } from './route-error';
 
@@ -26,7 +26,8 @@ const PAGE_SIZE = 25;
 const roles = rolesForPath(paths.layerChecks);
 const sortable = ['title', 'processKind', 'updatedAt', 'depth', 'margin'] as const;
 
-function listParams(search: URLSearchParams): LayerCheckListParams {
+/** `owner=me` in the URL keeps "Only my checks" across reloads and shared links; the API gets the id. */
+function listParams(search: URLSearchParams, meId: string): LayerCheckListParams {
   const kind = search.get('kind');
   const sort = search.get('sort');
   return {
@@ -34,13 +35,16 @@ function listParams(search: URLSearchParams): LayerCheckListParams {
     pageSize: PAGE_SIZE,
     q: readText(search, 'q'),
     processKind: (processKindValues as readonly string[]).includes(kind ?? '') ? (kind as ProcessKind) : undefined,
+    ownerId: search.get('owner') === 'me' ? meId : undefined,
     sort: (sortable as readonly string[]).includes(sort ?? '') ? (sort as LayerCheckListParams['sort']) : 'updatedAt',
     dir: search.get('dir') === 'asc' ? 'asc' : 'desc',
   };
 }
 
 export async function loader({ request }: LoaderFunctionArgs) {
-  if (await hasRole(request, roles)) await queryClient.ensureQueryData(layerChecksQueryOptions(listParams(new URL(request.url).searchParams)));
+  const me = await requireMe(request);
+  if (!roles.includes(me.role)) return null;
+  await queryClient.ensureQueryData(layerChecksQueryOptions(listParams(new URL(request.url).searchParams, me.id)));
   return null;
 }
 
@@ -48,11 +52,11 @@ function LayerChecksPage() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const [system] = useUnitSystem();
   const [search, setSearch] = useSearchParams();
-  const params = listParams(search);
+  const params = listParams(search, me.id);
   const checks = useLayerChecks(params);
   const canWrite = me.role === 'engineer';
   const sorting: SortingState = [{ id: params.sort ?? 'updatedAt', desc: params.dir === 'desc' }];
-  const filtered = Boolean(params.q || params.processKind);
+  const filtered = Boolean(params.q || params.processKind || params.ownerId);
 
   return (
     <>
@@ -87,6 +91,15 @@ function LayerChecksPage() {
               ))}
             </select>
           </label>
+          <label className="flex min-h-11 items-center gap-2 text-sm">
+            <input
+              type="checkbox"
+              className="size-5"
+              checked={Boolean(params.ownerId)}
+              onChange={(event) => setSearch(withParams(search, { owner: event.target.checked ? 'me' : undefined }))}
+            />
+            Only my checks
+          </label>
           <UnitSystemSelect />
         </div>
         {checks.isPending ? (
@@ -97,7 +110,7 @@ function LayerChecksPage() {
           </Notice>
         ) : checks.data.total === 0 ? (
           <EmptyState title={filtered ? 'No check matches these filters' : 'No layer checks yet'}>
-            {filtered ? 'Clear the search or the process-kind filter.' : canWrite ? 'Start one with “New layer check”.' : 'A Process engineer sets up the checks; they appear here.'}
+            {filtered ? 'Clear the search, the process-kind filter or “Only my checks”.' : canWrite ? 'Start one with “New layer check”.' : 'A Process engineer sets up the checks; they appear here.'}
           </EmptyState>
         ) : (
           <>

@@ -7,6 +7,8 @@ export interface LayerCheckListParams {
   pageSize: number;
   q?: string;
   processKind?: ProcessKind;
+  /** Only this person's checks ("Only my checks" sends the signed-in person's id). */
+  ownerId?: string;
   sort?: 'title' | 'processKind' | 'updatedAt' | 'depth' | 'margin';
   dir?: 'asc' | 'desc';
 }
