@@ -211,6 +211,7 @@ export function evaluateLayerCheck(check: LayerFields, laws: FluidLaws, fluid: {
     mechanismSentence: mechanismSentence({
       depth: layer.depth,
       hasSurface,
+      longWave,
       dynamicBond: finite(g.dynamicBond),
       rayleighCritical: finite(ev.criticalRayleigh.value),
       marangoniCritical: ev.criticalMarangoni ? finite(ev.criticalMarangoni.value) : null,
