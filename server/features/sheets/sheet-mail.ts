@@ -12,8 +12,13 @@ export interface SheetMailContext {
 
 const signature = ['', 'QuietLayer at Larkspur Coatings'];
 
+/** The lines that name a sheet in a message (also used by the failed-signing alert). */
+export function sheetHeading(sheet: SheetMailContext): string[] {
+  return [`Process sheet ${sheet.number}, revision ${sheet.revision}: ${sheet.title}`, `Line: ${sheet.line}`];
+}
+
 function heading(sheet: SheetMailContext): string[] {
-  return [`Process sheet ${sheet.number}, revision ${sheet.revision}: ${sheet.title}`, `Line: ${sheet.line}`, ''];
+  return [...sheetHeading(sheet), ''];
 }
 
 export function reviewRequestMail(to: string, sheet: SheetMailContext, authorName: string): OutgoingMail {
@@ -62,25 +67,6 @@ export function sheetReturnedMail(to: string, sheet: SheetMailContext, reviewerN
         .join('\n'),
       '',
       'Make the changes in the layer check, then issue a new revision of the sheet from its page:',
-      sheet.link,
-      ...signature,
-    ].join('\n'),
-  };
-}
-
-/** 21 CFR 11.300(d): attempted misuse is detected and reported at once to those responsible. */
-export function signFailuresAlertMail(to: string, sheet: SheetMailContext, person: { email: string; name: string }, failures: number, windowMinutes: number): OutgoingMail {
-  return {
-    to,
-    kind: 'sheet-sign-failures-alert',
-    subject: `Alert: ${failures} failed signing attempts by ${person.email}`,
-    text: [
-      `${person.name} (${person.email}) entered a wrong password ${failures} times in the last ${windowMinutes} minutes while signing a process sheet.`,
-      '',
-      ...heading(sheet),
-      'If this was not them, deactivate the account at once in Users and ask them to reset their password.',
-      'Every attempt is in the audit trail as "sheet.sign_failed".',
-      '',
       sheet.link,
       ...signature,
     ].join('\n'),

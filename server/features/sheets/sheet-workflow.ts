@@ -1,6 +1,7 @@
 import type { Role } from '../../../shared/schemas/roles';
 import { sheetStateLabels, type SheetAction, type SheetState } from '../../../shared/schemas/sheets';
 import { ConflictError, ForbiddenError } from '../../errors';
+import { ownWorkRefusal } from '../signatures/electronic-signature';
 
 /**
  * THE state machine of a Process sheet revision. Every change of state goes through
@@ -61,9 +62,7 @@ function refusal(event: SheetEvent, actor: WorkflowActor | 'system', revision: W
   if (actor === 'system') return null;
   if (!rule.roles.includes(actor.role)) return `Your role cannot ${event} a process sheet.`;
   if (event === 'submit' && actor.id !== revision.authorId) return 'Only the author of this revision can submit it for review.';
-  if ((event === 'sign' || event === 'return') && actor.id === revision.authorId) {
-    return 'You wrote this revision: another QA reviewer must review and sign it.';
-  }
+  if (event === 'sign' || event === 'return') return ownWorkRefusal(actor.id, revision.authorId, 'this revision', 'review and sign it');
   return null;
 }
 

@@ -1,4 +1,4 @@
-import { and, count, desc, eq, gte, inArray, ilike, lt, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, inArray, ilike, lt, ne, or, sql, type SQL } from 'drizzle-orm';
 
 import type { z } from 'zod';
 import type { Role } from '../../../shared/schemas/roles';
@@ -247,20 +247,6 @@ export async function findActiveUsersWithRole(db: DbOrTx, role: Role, options: {
   const conditions = [eq(users.role, role), eq(users.active, true)];
   if (options.except) conditions.push(ne(users.id, options.except));
   return db.select({ id: users.id, email: users.email, displayName: users.displayName }).from(users).where(and(...conditions));
-}
-
-export async function findPasswordHash(db: DbOrTx, userId: string): Promise<string | null> {
-  const [row] = await db.select({ hash: users.passwordHash }).from(users).where(eq(users.id, userId)).limit(1);
-  return row?.hash ?? null;
-}
-
-/** How many failed signings this person made since `since` (from the audit trail). */
-export async function countSignFailuresSince(db: DbOrTx, userId: string, since: Date): Promise<number> {
-  const [row] = await db
-    .select({ n: count() })
-    .from(auditEvents)
-    .where(and(eq(auditEvents.actorId, userId), eq(auditEvents.action, 'sheet.sign_failed'), gte(auditEvents.occurredAt, since)));
-  return row.n;
 }
 
 /** The check, one of its revisions (the newest when `revision` is not given) and who saved it. */

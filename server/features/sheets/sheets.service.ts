@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 import type { z } from 'zod';
 import { roleLabels } from '../../../shared/schemas/roles';
 import {
@@ -17,20 +16,19 @@ import {
   signSheetInputSchema,
 } from '../../../shared/schemas/sheets';
 import type { CurrentUser } from '../../auth/current-user';
-import { verifyPassword } from '../../auth/passwords';
 import type { Database, DbOrTx } from '../../db/client';
 import type { Env } from '../../env';
-import { ConflictError, NotFoundError, TooManyRequestsError, UnprocessableError } from '../../errors';
+import { ConflictError, NotFoundError, UnprocessableError } from '../../errors';
 import { enqueueMail } from '../../mail/enqueue-mail';
 import { recordAuditEvent } from '../audit/record-audit-event';
+import { confirmSigner, signatureManifest, signedContentSha256 } from '../signatures/electronic-signature';
 import { dryingPathForSheet, propertySpreadForSheet } from './beyond-onset-summaries';
 import { buildSheetSnapshot } from './build-sheet-snapshot';
 import { renderSheetPdf, type SheetPdfInput } from './pdf/render-sheet-pdf';
-import { reviewRequestMail, sheetReturnedMail, sheetSignedMail, signFailuresAlertMail, type SheetMailContext } from './sheet-mail';
+import { reviewRequestMail, sheetHeading, sheetReturnedMail, sheetSignedMail, type SheetMailContext } from './sheet-mail';
 import { SHEET_SITE, sheetNumber } from './sheet-site';
 import { allowedActions, transition } from './sheet-workflow';
 import {
-  countSignFailuresSince,
   findActiveUsersWithRole,
   findAuditOfRevisions,
   findBySignedSha,
@@ -38,7 +36,6 @@ import {
   findFluidForSnapshot,
   findLatestDryingSetup,
   findLatestFinishedSpread,
-  findPasswordHash,
   findReturns,
   findReturnsOfSheet,
   findRevision,
@@ -62,13 +59,6 @@ import {
 export interface RequestMeta {
   requestId?: string;
 }
-
-/** Failed signings within this window count towards the administrators' alert and the lock-out. */
-export const SIGN_FAILURE_WINDOW_MINUTES = 15;
-/** Administrators are e-mailed at this many failures in the window (and at each further multiple). */
-export const SIGN_FAILURE_ALERT_AT = 3;
-/** Further signing attempts are refused (429) once this many failed in the window. */
-export const SIGN_FAILURE_LOCKOUT_AT = 6;
 
 const ENTITY = 'process_sheet';
 const actorOf = (user: CurrentUser) => ({ id: user.id, email: user.email });
@@ -350,28 +340,6 @@ function pdfInput(env: Pick<Env, 'PUBLIC_URL'>, row: RevisionWithSheet, returns:
   };
 }
 
-/** Records a failed signing, alerts the administrators at every SIGN_FAILURE_ALERT_AT-th failure in the window. */
-async function recordSignFailure(db: Database, env: Pick<Env, 'PUBLIC_URL'>, user: CurrentUser, row: RevisionWithSheet, meta: RequestMeta, now: Date) {
-  await db.transaction(async (tx) => {
-    await recordAuditEvent(tx, {
-      actor: actorOf(user),
-      action: 'sheet.sign_failed',
-      entityType: ENTITY,
-      entityId: row.revision.id,
-      after: { reason: 'wrong password' },
-      requestId: meta.requestId,
-    });
-    const since = new Date(now.getTime() - SIGN_FAILURE_WINDOW_MINUTES * 60_000);
-    const failures = await countSignFailuresSince(tx, user.id, since);
-    if (failures >= SIGN_FAILURE_ALERT_AT && failures % SIGN_FAILURE_ALERT_AT === 0) {
-      const administrators = await findActiveUsersWithRole(tx, 'administrator');
-      for (const admin of administrators) {
-        await enqueueMail(tx, signFailuresAlertMail(admin.email, mailContext(env, row), { email: user.email, name: user.displayName }, failures, SIGN_FAILURE_WINDOW_MINUTES));
-      }
-    }
-  });
-}
-
 /**
  * Electronic signature (21 CFR 11.50, 11.200): the reviewer re-enters their password and states the
  * meaning. The PDF is rendered with the filled signature block; its SHA-256, the signer's printed
@@ -388,37 +356,34 @@ export async function signSheet(
 ): Promise<SheetDetail> {
   const row = await requireRevision(db, id);
   transition('sign', user, workflowView(row));
-  const now = new Date();
-  const recent = await countSignFailuresSince(db, user.id, new Date(now.getTime() - SIGN_FAILURE_WINDOW_MINUTES * 60_000));
-  if (recent >= SIGN_FAILURE_LOCKOUT_AT) {
-    throw new TooManyRequestsError(SIGN_FAILURE_WINDOW_MINUTES * 60, `Signing is paused for your account after ${recent} wrong passwords; an administrator has been told. Try again later.`);
-  }
-  const hash = await findPasswordHash(db, user.id);
-  if (!hash || !(await verifyPassword(input.password, hash))) {
-    await recordSignFailure(db, env, user, row, meta, now);
-    throw new UnprocessableError('The password is not right; the sheet was not signed.', { password: 'The password is not right.' });
-  }
+  await confirmSigner(db, user, input.password, {
+    entityType: ENTITY,
+    entityId: id,
+    noun: 'sheet',
+    alertKind: 'sheet-sign-failures-alert',
+    describe: async () => ({ kind: 'process sheet', heading: sheetHeading(mailContext(env, row)), link: sheetLink(env, id) }),
+    requestId: meta.requestId,
+  });
   await db.transaction(async (tx) => {
     const locked = await requireRevision(tx, id, { forUpdate: true });
     const to = transition('sign', user, workflowView(locked));
-    const signedAt = new Date();
-    const meaningText = signatureMeaningLabels[input.meaning];
+    const { printedName, role, meaning, meaningText, signedAt } = signatureManifest(user, input.meaning, signatureMeaningLabels);
     const returns = await findReturnsOfSheet(tx, locked.sheet.id, locked.revision.revision);
     const pdf = await renderSheetPdf({
       ...pdfInput(env, locked, returns),
       state: to,
-      signature: { printedName: user.displayName, roleLabel: roleLabels[user.role], signedAt: signedAt.toISOString(), meaningText },
+      signature: { printedName, roleLabel: roleLabels[role], signedAt: signedAt.toISOString(), meaningText },
     });
-    const sha256 = createHash('sha256').update(pdf).digest('hex');
+    const sha256 = signedContentSha256(pdf);
     await setRevisionState(tx, id, { state: to, decidedAt: signedAt, signedPdf: pdf, pdfSha256: sha256 });
-    await insertSignature(tx, { revisionId: id, signerId: user.id, printedName: user.displayName, signerRole: user.role, meaning: input.meaning, signedAt, pdfSha256: sha256 });
+    await insertSignature(tx, { revisionId: id, signerId: user.id, printedName, signerRole: role, meaning, signedAt, pdfSha256: sha256 });
     await recordAuditEvent(tx, {
       actor: actorOf(user),
       action: 'sheet.signed',
       entityType: ENTITY,
       entityId: id,
       before: { state: locked.revision.state },
-      after: { state: to, printedName: user.displayName, role: user.role, meaning: input.meaning, signedAt: signedAt.toISOString(), pdfSha256: sha256 },
+      after: { state: to, printedName, role, meaning, signedAt: signedAt.toISOString(), pdfSha256: sha256 },
       requestId: meta.requestId,
     });
     for (const earlier of await lockEarlierSigned(tx, locked.sheet.id, locked.revision.revision)) {
@@ -434,7 +399,7 @@ export async function signSheet(
         requestId: meta.requestId,
       });
     }
-    await enqueueMail(tx, sheetSignedMail(locked.authorEmail, mailContext(env, locked), { name: user.displayName, meaning: meaningText, signedAt }));
+    await enqueueMail(tx, sheetSignedMail(locked.authorEmail, mailContext(env, locked), { name: printedName, meaning: meaningText, signedAt }));
   });
   return getSheet(db, user, id);
 }
@@ -458,7 +423,7 @@ export async function getSheetPdf(db: DbOrTx, env: Pick<Env, 'PUBLIC_URL'>, id: 
  * signature is bound to exactly this rendition), or that it matches none. Every check is audited.
  */
 export async function verifySheetPdf(db: Database, user: CurrentUser, bytes: Buffer, meta: RequestMeta = {}): Promise<VerifyResult> {
-  const sha256 = createHash('sha256').update(bytes).digest('hex');
+  const sha256 = signedContentSha256(bytes);
   const found = await findBySignedSha(db, sha256);
   const result: VerifyResult = found
     ? {
