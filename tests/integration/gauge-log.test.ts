@@ -2,7 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { gaugeReadings, outboxMessages } from '../../server/db/schema';
+import { auditEvents, gaugeReadings, outboxMessages } from '../../server/db/schema';
 import { evaluateLayer } from '../../shared/physics/sizing/evaluate-layer';
 import { STANDARD_GRAVITY } from '../../shared/units/constants';
 import { createReleasedCheck, type ReleasedCheckFixture } from './gauge-support';
@@ -289,5 +289,31 @@ describe('gauge log: nonconformance notes', () => {
     expect(closed.body.signature).toMatchObject({ printedName: reviewer.displayName, role: 'reviewer', meaning: 'disposition-approved' });
     expect(closed.body.signature.meaningText).toMatch(/Disposition approved/);
     expect((await engineerAgent.post(`/api/gauge/notes/${note.id}/disposition`).send({ disposition: 'changed' })).status).toBe(422);
+  });
+
+  it('audits every wrong password at closing, alerts the administrators at the third, and pauses signing after six in 15 minutes (429), as for process sheets', async () => {
+    const admin = await createTestUser(ctx.db, { role: 'administrator' });
+    const sloppy = await createTestUser(ctx.db, { role: 'reviewer', label: 'sloppy' });
+    const agent = await signedInAgent(ctx.app, sloppy);
+    const notes = await reviewerAgent.get(`/api/gauge/notes?revisionId=${released.revisionId}`);
+    const noteId = notes.body.items[0].id as string;
+    for (let i = 0; i < 6; i += 1) {
+      const res = await agent.post(`/api/gauge/notes/${noteId}/close`).send({ password: 'wrong', meaning: 'disposition-approved' });
+      expect(res.status).toBe(422);
+      expect(res.body.error.message).toBe('The password is not right; the note was not signed.');
+    }
+    const failures = await ctx.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.actorId, sloppy.id), eq(auditEvents.action, 'gauge_note.signing_failed')));
+    expect(failures).toHaveLength(6);
+    expect(failures.every((f) => f.entityId === noteId && f.reason === 'wrong password at signing')).toBe(true);
+    const alerts = await ctx.db
+      .select()
+      .from(outboxMessages)
+      .where(and(eq(outboxMessages.toAddress, admin.email), eq(outboxMessages.kind, 'gauge-note-sign-failures-alert')));
+    expect(alerts.length).toBe(2); // at the 3rd and the 6th failure
+    const paused = await agent.post(`/api/gauge/notes/${noteId}/close`).send({ password: sloppy.password, meaning: 'disposition-approved' });
+    expect(paused.status).toBe(429);
   });
 });

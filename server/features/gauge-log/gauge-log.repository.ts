@@ -378,12 +378,3 @@ export async function findNoteForUpdate(db: DbOrTx, id: string): Promise<NoteRow
 export async function updateNote(db: DbOrTx, id: string, values: Partial<typeof gaugeNotes.$inferInsert>): Promise<void> {
   await db.update(gaugeNotes).set(values).where(eq(gaugeNotes.id, id));
 }
-
-export async function findUserSecret(db: DbOrTx, id: string) {
-  const [row] = await db
-    .select({ id: users.id, email: users.email, displayName: users.displayName, role: users.role, passwordHash: users.passwordHash })
-    .from(users)
-    .where(eq(users.id, id))
-    .limit(1);
-  return row;
-}

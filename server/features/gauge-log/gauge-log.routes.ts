@@ -265,7 +265,7 @@ export function registerGaugeLogRoutes(api: ApiRouter): void {
     action: 'gauge.notes.close',
     handler: async (req, res, ctx) => {
       const { id } = idParamsSchema.parse(req.params);
-      res.json(await closeNote(ctx.db, ctx.user, id, closeNoteInputSchema.parse(req.body), ctx.requestId));
+      res.json(await closeNote(ctx.db, ctx.user, id, closeNoteInputSchema.parse(req.body), { requestId: ctx.requestId, publicUrl: ctx.env.PUBLIC_URL }));
     },
   });
 }

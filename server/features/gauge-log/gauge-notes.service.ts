@@ -7,11 +7,11 @@ import {
   type gaugeNoteListQuerySchema,
 } from '../../../shared/schemas/gauge-log';
 import type { CurrentUser } from '../../auth/current-user';
-import { verifyPassword } from '../../auth/passwords';
 import type { Database } from '../../db/client';
 import { ForbiddenError, NotFoundError, UnprocessableError } from '../../errors';
 import { recordAuditEvent } from '../audit/record-audit-event';
-import { findNoteForUpdate, findNotePage, findUserSecret, updateNote } from './gauge-log.repository';
+import { confirmSigner, ownWorkRefusal, signatureManifest, signedContentSha256 } from '../signatures/electronic-signature';
+import { findNoteForUpdate, findNotePage, updateNote } from './gauge-log.repository';
 
 type NotePageRow = Awaited<ReturnType<typeof findNotePage>>['rows'][number];
 
@@ -84,48 +84,53 @@ export async function dispositionNote(db: Database, user: CurrentUser, id: strin
 }
 
 /**
- * A QA reviewer closes a dispositioned note with an electronic signature, under the same rules as
- * process sheets: the password is entered again (21 CFR 11.200(a)), the meaning is chosen and
- * shown with the printed name and time (11.50), and the signer may not be the author of the
- * disposition. A wrong password is recorded in the trail and nothing is signed.
+ * A QA reviewer closes a dispositioned note with an electronic signature, under the rules of
+ * server/features/signatures/electronic-signature.ts (password re-entered, failures audited, alerted
+ * and paused, not the author of the disposition, printed name, role, meaning and time). The SHA-256
+ * of what was signed (the note, its disposition and the signature) goes into the trail.
  */
-export async function closeNote(db: Database, user: CurrentUser, id: string, input: z.output<typeof closeNoteInputSchema>, requestId: string): Promise<GaugeNote> {
-  const signer = await findUserSecret(db, user.id);
-  const passwordOk = signer?.passwordHash ? await verifyPassword(input.password, signer.passwordHash) : false;
-  if (!passwordOk) {
-    await recordAuditEvent(db, {
-      actor: { id: user.id, email: user.email },
-      action: 'gauge_note.signing_failed',
-      entityType: 'gauge_note',
-      entityId: id,
-      reason: 'wrong password at signing',
-      requestId,
-    });
-    throw new UnprocessableError('The password is not right; the note was not signed.', { password: 'The password is not right.' });
-  }
+export async function closeNote(
+  db: Database,
+  user: CurrentUser,
+  id: string,
+  input: z.output<typeof closeNoteInputSchema>,
+  meta: { requestId: string; publicUrl: string },
+): Promise<GaugeNote> {
+  await confirmSigner(db, user, input.password, {
+    entityType: 'gauge_note',
+    entityId: id,
+    noun: 'note',
+    alertKind: 'gauge-note-sign-failures-alert',
+    describe: async () => {
+      const { rows } = await findNotePage(db, { page: 1, pageSize: 1, ids: [id] });
+      const row = rows[0];
+      if (!row) return { kind: 'nonconformance note', heading: [`Nonconformance note ${id}`], link: `${meta.publicUrl}/gauge` };
+      return {
+        kind: 'nonconformance note',
+        heading: [`Nonconformance note on ${row.sheetNumber} (${row.title}), run ${row.note.run}`, `Line: ${row.line}`],
+        link: `${meta.publicUrl}/gauge/${row.note.revisionId}`,
+      };
+    },
+    requestId: meta.requestId,
+  });
   await db.transaction(async (tx) => {
     const note = await findNoteForUpdate(tx, id);
     if (!note) throw new NotFoundError('No nonconformance note has this id.');
     if (note.state === 'closed') throw new UnprocessableError('This note is already closed and signed.');
     if (note.state !== 'dispositioned') throw new UnprocessableError('The owner must write a disposition before the note can be closed.');
-    if (note.dispositionBy === user.id) throw new ForbiddenError('You wrote the disposition: another QA reviewer must close this note.');
-    const at = new Date();
-    await updateNote(tx, id, {
-      state: 'closed',
-      closedBy: user.id,
-      closedByName: signer!.displayName,
-      closedByRole: signer!.role,
-      closeMeaning: input.meaning,
-      closedAt: at,
-    });
+    const ownWork = ownWorkRefusal(user.id, note.dispositionBy, 'the disposition', 'close this note');
+    if (ownWork) throw new ForbiddenError(ownWork);
+    const { printedName, role, meaning, signedAt } = signatureManifest(user, input.meaning, noteMeaningLabels);
+    const signed = { noteId: id, run: note.run, disposition: note.disposition, printedName, role, meaning, signedAt: signedAt.toISOString() };
+    await updateNote(tx, id, { state: 'closed', closedBy: user.id, closedByName: printedName, closedByRole: role, closeMeaning: meaning, closedAt: signedAt });
     await recordAuditEvent(tx, {
       actor: { id: user.id, email: user.email },
       action: 'gauge_note.closed',
       entityType: 'gauge_note',
       entityId: id,
       before: { state: note.state },
-      after: { state: 'closed', printedName: signer!.displayName, role: signer!.role, meaning: input.meaning, signedAt: at.toISOString() },
-      requestId,
+      after: { state: 'closed', printedName, role, meaning, signedAt: signed.signedAt, contentSha256: signedContentSha256(JSON.stringify(signed)) },
+      requestId: meta.requestId,
     });
   });
   return getNote(db, user, id);
