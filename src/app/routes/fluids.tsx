@@ -2,11 +2,9 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import type { SortingState } from '@tanstack/react-table';
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { fluidKindLabels, fluidKindValues, type FluidKind } from '../../../shared/schemas/fluids';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Loading } from '../../components/ui/loading';
-import { Notice } from '../../components/ui/notice';
+import { FilterCheckbox, FilterSelect } from '../../components/ui/list-filters';
 import { PageHeader } from '../../components/ui/page-header';
-import { Pagination } from '../../components/ui/pagination';
+import { PagedList } from '../../components/ui/paged-list';
 import { SearchBox } from '../../components/ui/search-box';
 import { UnitSystemSelect } from '../../components/units/unit-system-select';
 import { rolesForPath } from '../../config/navigation';
@@ -83,64 +81,28 @@ function FluidsPage() {
             <div className="min-w-64 flex-1">
               <SearchBox label="Find by name" value={params.q ?? ''} onSearch={(q) => setSearch(withParams(search, { q }))} />
             </div>
-            <label className="flex flex-col gap-1 text-sm font-semibold">
-              Kind
-              <select
-                value={params.kind ?? ''}
-                onChange={(event) => setSearch(withParams(search, { kind: event.target.value }))}
-                className="min-h-11 rounded-md border border-slate-line bg-paper-raised px-2 font-normal"
-              >
-                <option value="">All kinds</option>
-                {fluidKindValues.map((kind) => (
-                  <option key={kind} value={kind}>
-                    {fluidKindLabels[kind]}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="flex min-h-11 items-center gap-2 text-sm">
-              <input
-                type="checkbox"
-                className="size-5"
-                checked={Boolean(params.includeArchived)}
-                onChange={(event) => setSearch(withParams(search, { archived: event.target.checked ? 'shown' : undefined }))}
-              />
-              Show archived
-            </label>
+            <FilterSelect
+              label="Kind"
+              value={params.kind ?? ''}
+              allLabel="All kinds"
+              values={fluidKindValues}
+              labels={fluidKindLabels}
+              onChange={(kind) => setSearch(withParams(search, { kind }))}
+            />
+            <FilterCheckbox label="Show archived" checked={Boolean(params.includeArchived)} onChange={(shown) => setSearch(withParams(search, { archived: shown ? 'shown' : undefined }))} />
             <UnitSystemSelect />
           </div>
-          {fluids.isPending ? (
-            <Loading label="Loading fluids…" />
-          ) : fluids.isError ? (
-            <Notice tone="error" title="Could not load the fluids">
-              {fluids.error.message}
-            </Notice>
-          ) : fluids.data.total === 0 ? (
-            <EmptyState title={filtered ? 'No fluid matches these filters' : 'The library is empty'}>
-              {filtered ? 'Clear the search or the kind filter.' : canWrite ? 'Add a fluid with “New fluid”, or import a CSV file.' : 'A Process engineer adds fluids to the library.'}
-            </EmptyState>
-          ) : (
-            <>
-              <FluidsTable
-                fluids={fluids.data.items}
-                system={system}
-                sorting={sorting}
-                busy={fluids.isPlaceholderData}
-                onSortingChange={(next) => {
-                  const first = next[0];
-                  setSearch(withParams(search, { sort: first?.id, dir: first?.desc ? 'desc' : 'asc' }));
-                }}
-              />
-              <Pagination
-                label="Fluids"
-                page={fluids.data.page}
-                pageSize={fluids.data.pageSize}
-                total={fluids.data.total}
-                busy={fluids.isFetching}
-                onPageChange={(page) => setSearch(withParams(search, { page }))}
-              />
-            </>
-          )}
+          <PagedList
+            query={fluids}
+            noun="fluids"
+            label="Fluids"
+            emptyTitle={filtered ? 'No fluid matches these filters' : 'The library is empty'}
+            emptyText={filtered ? 'Clear the search or the kind filter.' : canWrite ? 'Add a fluid with “New fluid”, or import a CSV file.' : 'A Process engineer adds fluids to the library.'}
+            search={search}
+            onSearchChange={setSearch}
+          >
+            {(items, table) => <FluidsTable fluids={items} system={system} sorting={sorting} {...table} />}
+          </PagedList>
         </section>
         {canWrite && (
           <aside className="no-print max-w-3xl">

@@ -2,11 +2,9 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import type { SortingState } from '@tanstack/react-table';
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { processKindLabels, processKindValues, type ProcessKind } from '../../../shared/schemas/layer-checks';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Loading } from '../../components/ui/loading';
-import { Notice } from '../../components/ui/notice';
+import { FilterCheckbox, FilterSelect } from '../../components/ui/list-filters';
 import { PageHeader } from '../../components/ui/page-header';
-import { Pagination } from '../../components/ui/pagination';
+import { PagedList } from '../../components/ui/paged-list';
 import { SearchBox } from '../../components/ui/search-box';
 import { UnitSystemSelect } from '../../components/units/unit-system-select';
 import { rolesForPath } from '../../config/navigation';
@@ -76,64 +74,28 @@ function LayerChecksPage() {
           <div className="min-w-64 flex-1">
             <SearchBox label="Find by title" value={params.q ?? ''} onSearch={(q) => setSearch(withParams(search, { q }))} />
           </div>
-          <label className="flex flex-col gap-1 text-sm font-semibold">
-            Process kind
-            <select
-              value={params.processKind ?? ''}
-              onChange={(event) => setSearch(withParams(search, { kind: event.target.value }))}
-              className="min-h-11 rounded-md border border-slate-line bg-paper-raised px-2 font-normal"
-            >
-              <option value="">All kinds</option>
-              {processKindValues.map((kind) => (
-                <option key={kind} value={kind}>
-                  {processKindLabels[kind]}
-                </option>
-              ))}
-            </select>
-          </label>
-          <label className="flex min-h-11 items-center gap-2 text-sm">
-            <input
-              type="checkbox"
-              className="size-5"
-              checked={Boolean(params.ownerId)}
-              onChange={(event) => setSearch(withParams(search, { owner: event.target.checked ? 'me' : undefined }))}
-            />
-            Only my checks
-          </label>
+          <FilterSelect
+            label="Process kind"
+            value={params.processKind ?? ''}
+            allLabel="All kinds"
+            values={processKindValues}
+            labels={processKindLabels}
+            onChange={(kind) => setSearch(withParams(search, { kind }))}
+          />
+          <FilterCheckbox label="Only my checks" checked={Boolean(params.ownerId)} onChange={(mine) => setSearch(withParams(search, { owner: mine ? 'me' : undefined }))} />
           <UnitSystemSelect />
         </div>
-        {checks.isPending ? (
-          <Loading label="Loading layer checks…" />
-        ) : checks.isError ? (
-          <Notice tone="error" title="Could not load the layer checks">
-            {checks.error.message}
-          </Notice>
-        ) : checks.data.total === 0 ? (
-          <EmptyState title={filtered ? 'No check matches these filters' : 'No layer checks yet'}>
-            {filtered ? 'Clear the search, the process-kind filter or “Only my checks”.' : canWrite ? 'Start one with “New layer check”.' : 'A Process engineer sets up the checks; they appear here.'}
-          </EmptyState>
-        ) : (
-          <>
-            <LayerChecksTable
-              checks={checks.data.items}
-              system={system}
-              sorting={sorting}
-              busy={checks.isPlaceholderData}
-              onSortingChange={(next) => {
-                const first = next[0];
-                setSearch(withParams(search, { sort: first?.id, dir: first?.desc ? 'desc' : 'asc' }));
-              }}
-            />
-            <Pagination
-              label="Layer checks"
-              page={checks.data.page}
-              pageSize={checks.data.pageSize}
-              total={checks.data.total}
-              busy={checks.isFetching}
-              onPageChange={(page) => setSearch(withParams(search, { page }))}
-            />
-          </>
-        )}
+        <PagedList
+          query={checks}
+          noun="layer checks"
+          label="Layer checks"
+          emptyTitle={filtered ? 'No check matches these filters' : 'No layer checks yet'}
+          emptyText={filtered ? 'Clear the search, the process-kind filter or “Only my checks”.' : canWrite ? 'Start one with “New layer check”.' : 'A Process engineer sets up the checks; they appear here.'}
+          search={search}
+          onSearchChange={setSearch}
+        >
+          {(items, table) => <LayerChecksTable checks={items} system={system} sorting={sorting} {...table} />}
+        </PagedList>
       </div>
     </>
   );
