@@ -49,6 +49,8 @@ export function evaluateLayer(layer: PhysicalLayer, options: DepthSearchOptions 
   const searchOptions = { ...options, depthOnsets };
   const boundaries = { bottom: checked.bottom, bottomThermal: checked.bottomThermal, top: checked.top, biot: groups.biot };
   const wavenumber = onset.cellWavenumber;
+  // The single-drive searches start at the coupled k_c (same boundaries and Bi): fewer λ evaluations.
+  const cellHint = Number.isFinite(wavenumber) && wavenumber > 0 ? wavenumber : undefined;
   let limits;
   if (checked.deltaT === 0) {
     const reference = { ...checked, deltaT: 1 };
@@ -59,8 +61,8 @@ export function evaluateLayer(layer: PhysicalLayer, options: DepthSearchOptions 
   return Object.freeze({
     groups,
     onset,
-    criticalRayleigh: criticalRayleigh(boundaries),
-    criticalMarangoni: checked.top === 'surface' ? criticalMarangoni(boundaries) : null,
+    criticalRayleigh: criticalRayleigh(boundaries, { wavenumberHint: cellHint }),
+    criticalMarangoni: checked.top === 'surface' ? criticalMarangoni(boundaries, { wavenumberHint: cellHint }) : null,
     margin: onset.margin,
     cellMargin: onset.cellMargin,
     regime: onset.regime,

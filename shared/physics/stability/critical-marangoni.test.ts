@@ -72,4 +72,13 @@ describe('criticalMarangoni (Pearson 1958)', () => {
     expect(() => criticalMarangoni({ bottom: 'rigid', bottomThermal: 'conducting', top: 'free', biot: 0 })).toThrow(RangeError);
     expect(() => criticalMarangoni({ bottom: 'rigid', bottomThermal: 'conducting', top: 'rigid', biot: 0 })).toThrow(/top/);
   });
+  it('a wavenumber hint changes the cost, not the answer: Ma_c = 79.607 from hints 1.2, 2.6 and 5 (Pearson 1958)', () => {
+    const cold = criticalMarangoni(surface(0, 'conducting'));
+    for (const wavenumberHint of [1.2, 2.6, 5]) {
+      const hinted = criticalMarangoni(surface(0, 'conducting'), { wavenumberHint });
+      expect(Math.abs(hinted.value / 79.607 - 1)).toBeLessThan(1e-5);
+      expect(Math.abs(hinted.value / cold.value - 1)).toBeLessThan(1e-7);
+    }
+    expect(() => criticalMarangoni(surface(0, 'conducting'), { wavenumberHint: -1 })).toThrow(/wavenumberHint/);
+  });
 });

@@ -1,5 +1,6 @@
 import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
 import { criticalFactor } from './critical-factor';
+import { checkedHint, type CriticalSearchOptions } from './critical-search-options';
 import type { CriticalValue, LayerBoundaries } from './types';
 import { validateProblem } from './validate-problem';
 
@@ -19,12 +20,13 @@ import { validateProblem } from './validate-problem';
  *   bottom and Bi = 0). doi:10.1146/annurev.fl.19.010187.002155
  *
  * @param boundaries - bottom, bottomThermal, top (must be 'surface'), biot [-] (Infinity = conducting)
+ * @param options - optional wavenumberHint [1/d] where the search starts (a neighbouring k_c); changes the cost, not the minimum
  * @returns Ma_c [-] (Infinity for a conducting top: no surface-temperature perturbation) and k_c
  *          [1/d] (0 when the minimum lies at k → 0; NaN when Ma_c is infinite)
  * @throws RangeError when top is not 'surface' or a boundary field is invalid
  * @example criticalMarangoni({ bottom: 'rigid', bottomThermal: 'conducting', top: 'surface', biot: 0 }) // ≈ { value: 79.607, wavenumber: 1.993 }
  */
-export function criticalMarangoni(boundaries: LayerBoundaries): CriticalValue {
+export function criticalMarangoni(boundaries: LayerBoundaries, options: CriticalSearchOptions = {}): CriticalValue {
   if (boundaries?.top !== 'surface')
     throw new RangeError(`top must be 'surface' for a critical Marangoni number (thermocapillary stress acts only on a free surface), got ${String(boundaries?.top)}`);
   const checked = validateProblem({
@@ -35,6 +37,6 @@ export function criticalMarangoni(boundaries: LayerBoundaries): CriticalValue {
     rayleigh: 0,
     marangoni: 1,
   });
-  const minimum = criticalFactor(checked, createMarginalFactorEvaluator(checked));
+  const minimum = criticalFactor(checked, createMarginalFactorEvaluator(checked), { wavenumberHint: checkedHint(options.wavenumberHint) });
   return Object.freeze({ value: minimum.factor, wavenumber: minimum.wavenumber });
 }

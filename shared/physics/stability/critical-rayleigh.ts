@@ -1,5 +1,6 @@
 import { createMarginalFactorEvaluator } from './create-marginal-factor-evaluator';
 import { criticalFactor } from './critical-factor';
+import { checkedHint, type CriticalSearchOptions } from './critical-search-options';
 import type { CriticalValue, LayerBoundaries } from './types';
 import { validateProblem } from './validate-problem';
 
@@ -18,11 +19,12 @@ import { validateProblem } from './validate-problem';
  * - Nield, D. A. (1964) J. Fluid Mech. 19, 341–352 (669.00, rigid bottom, insulating free top).
  *
  * @param boundaries - bottom, bottomThermal, top, biot [-] (Infinity = conducting top)
+ * @param options - optional wavenumberHint [1/d] where the search starts (a neighbouring k_c); changes the cost, not the minimum
  * @returns Ra_c [-] and k_c [1/d] (0 when the minimum lies at k → 0, as with two insulating walls)
  * @throws RangeError naming the field when a boundary field is invalid
  * @example criticalRayleigh({ bottom: 'rigid', bottomThermal: 'conducting', top: 'rigid', biot: Infinity }) // ≈ { value: 1707.762, wavenumber: 3.117 }
  */
-export function criticalRayleigh(boundaries: LayerBoundaries): CriticalValue {
+export function criticalRayleigh(boundaries: LayerBoundaries, options: CriticalSearchOptions = {}): CriticalValue {
   const checked = validateProblem({
     bottom: boundaries?.bottom,
     bottomThermal: boundaries?.bottomThermal,
@@ -31,6 +33,6 @@ export function criticalRayleigh(boundaries: LayerBoundaries): CriticalValue {
     rayleigh: 1,
     marangoni: 0,
   } as LayerBoundaries);
-  const minimum = criticalFactor(checked, createMarginalFactorEvaluator(checked));
+  const minimum = criticalFactor(checked, createMarginalFactorEvaluator(checked), { wavenumberHint: checkedHint(options.wavenumberHint) });
   return Object.freeze({ value: minimum.factor, wavenumber: minimum.wavenumber });
 }
