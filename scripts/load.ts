@@ -11,13 +11,15 @@
  *      p99 ≤ 50 ms; list pages p99 ≤ 100 ms with 10,000 checks; no errors). A miss is printed as MISSED;
  *      the exit code is 0 unless the run itself failed (or some request errored, with --strict).
  *
- * Options: --duration=<s> per run (default 15), --connections=<n> (default 10), --strict.
+ * Options: --duration=<s> per run (default 15), --connections=<n> (default 10), --strict,
+ * --only=<text> (run only the runs whose label contains the text, e.g. --only=evaluate).
  * Everything it creates (database, child server) is removed at the end, also on Ctrl-C.
  */
 import { fork, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
+import type { createDatabase as CreateDatabase } from '../server/db/client';
 import { createDatabaseIfMissing, databaseUrlFor, dropDatabase, migrateDatabase } from './lib/database';
 import { ensurePostgres } from './lib/postgres';
 import { runDemoSeed } from './lib/seed/run-demo-seed';
@@ -177,10 +179,14 @@ async function main(): Promise<void> {
   const duration = option('duration', 15);
   const connections = option('connections', 10);
   const strict = process.argv.includes('--strict');
+  const only = process.argv.find((arg) => arg.startsWith('--only='))?.slice('--only='.length);
+  const wanted = (label: string) => only === undefined || label.includes(only);
 
   const postgres = await ensurePostgres({ log: () => {} });
   const name = `quietlayer_load_${randomBytes(4).toString('hex')}`;
   let child: ChildProcess | undefined;
+  let smtpFake: { port: number; close(): Promise<void> } | undefined;
+  let mailDatabase: ReturnType<typeof CreateDatabase> | undefined;
   let cleaned = false;
   const cleanUp = async () => {
     if (cleaned) return;
@@ -190,6 +196,8 @@ async function main(): Promise<void> {
       child.kill('SIGTERM');
       await exited;
     }
+    await smtpFake?.close().catch(() => {});
+    await mailDatabase?.pool.end().catch(() => {});
     await dropDatabase(postgres.adminUrl, name).catch(() => {});
     await postgres.stop();
   };
@@ -202,6 +210,11 @@ async function main(): Promise<void> {
     const databaseUrl = databaseUrlFor(postgres.adminUrl, name);
     await migrateDatabase(databaseUrl);
     await runDemoSeed(databaseUrl, { bcryptCost: 12, log: () => {} });
+    // The seed queues mail (invitations, alerts): the local SMTP fake takes it, as under `npm start`.
+    const { createDatabase } = await import('../server/db/client');
+    const { startSmtpFake } = await import('../server/mail/smtp-fake');
+    mailDatabase = createDatabase(databaseUrl, { max: 1 });
+    smtpFake = await startSmtpFake({ db: mailDatabase.db, port: 0 });
     const insertStart = performance.now();
     await insertChecks(databaseUrl);
     console.log(`  scratch database ${name}: demo users and fluids, ${CHECKS} layer checks inserted in ${((performance.now() - insertStart) / 1000).toFixed(1)} s`);
@@ -216,8 +229,7 @@ async function main(): Promise<void> {
       // Request logs at info would flood this terminal; warnings and errors still show.
       LOG_LEVEL: 'warn',
       JOBS_ENABLED: 'false',
-      // No mail is sent during these runs; an address that refuses at once instead of the fake.
-      SMTP_URL: 'smtp://127.0.0.1:9',
+      SMTP_URL: `smtp://127.0.0.1:${smtpFake.port}`,
       PUBLIC_URL: '',
     });
     child = server.child;
@@ -251,16 +263,18 @@ async function main(): Promise<void> {
 
     // A different depth on every request: no two bodies alike, so nothing can be answered from a memo.
     let counter = 0;
-    results.push(
-      await run('POST /api/layer-checks/evaluate (every body new)', {
+    const evaluateNew = 'POST /api/layer-checks/evaluate (every body new)';
+    if (wanted(evaluateNew)) results.push(
+      await run(evaluateNew, {
         ...common,
         url,
         requests: [{ ...jsonPost, path: '/api/layer-checks/evaluate', setupRequest: (req: LoadRequest) => ({ ...req, body: evaluateBody(`${(20 + (counter++ % 400_000) * 0.0005).toFixed(4)} µm`) }) }],
       }, evaluateVerdict),
     );
     // The same body again and again (a person nudging nothing, or many clients asking the same).
-    results.push(
-      await run('POST /api/layer-checks/evaluate (one body repeated)', { ...common, url: `${url}/api/layer-checks/evaluate`, ...jsonPost, body: evaluateBody('50 µm') }, evaluateVerdict),
+    const evaluateRepeated = 'POST /api/layer-checks/evaluate (one body repeated)';
+    if (wanted(evaluateRepeated)) results.push(
+      await run(evaluateRepeated, { ...common, url: `${url}/api/layer-checks/evaluate`, ...jsonPost, body: evaluateBody('50 µm') }, evaluateVerdict),
     );
     const lists: Array<[string, string, string]> = [
       ['GET /api/layer-checks (10,000 checks, newest, 50)', '/api/layer-checks?pageSize=50', engineer],
@@ -271,7 +285,7 @@ async function main(): Promise<void> {
       ['GET /api/audit (administrator)', '/api/audit', admin],
     ];
     for (const [label, path, cookie] of lists) {
-      results.push(await run(label, { ...common, url: `${url}${path}`, headers: { cookie } }, listVerdict));
+      if (wanted(label)) results.push(await run(label, { ...common, url: `${url}${path}`, headers: { cookie } }, listVerdict));
     }
 
     const missed = results.filter((r) => r.verdict !== 'ok');
