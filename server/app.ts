@@ -9,6 +9,7 @@ import type { Env } from './env';
 import { createLogger, type Logger } from './logger';
 import type { AppDeps, RateLimitSettings } from './http/app-deps';
 import { assertEveryApiRouteIsDefined, createApiRouter } from './http/define-route';
+import { createInFlightWork, type InFlightWork } from './http/in-flight-work';
 import { createErrorHandler } from './middleware/error-handler';
 import { apiNotFound } from './middleware/not-found';
 import { csrfOriginCheck } from './middleware/csrf';
@@ -46,6 +47,8 @@ export interface CreateAppDeps {
   rateLimits?: Partial<{ signIn: RateLimitSettings; tokenUse: RateLimitSettings }>;
   /** Folder with the built client (index.html); defaults to <project>/dist/client. Served only if it exists. */
   clientDir?: string;
+  /** Tracker of running route work; startServer passes its own so shutdown can wait for it. */
+  inFlightWork?: InFlightWork;
 }
 
 const REQUEST_ID = /^[\w.:-]{1,100}$/;
@@ -59,6 +62,7 @@ export function createApp(input: CreateAppDeps): Express {
     env: input.env,
     logger,
     rateLimits: { ...DEFAULT_RATE_LIMITS, ...input.rateLimits },
+    inFlightWork: input.inFlightWork ?? createInFlightWork(),
   };
 
   const app = express();

@@ -5,6 +5,7 @@ import type { Express } from 'express';
 import { createApp } from './app';
 import { createDatabase } from './db/client';
 import { loadEnv } from './env';
+import { createInFlightWork } from './http/in-flight-work';
 import { createLogger } from './logger';
 import { createMailTransport, startOutboxDispatcher } from './mail';
 import { startServerJobs } from './jobs/start-server-jobs';
@@ -12,7 +13,10 @@ import { startServerJobs } from './jobs/start-server-jobs';
 export interface StartedServer {
   /** Where the app answers, e.g. http://127.0.0.1:3000 (the real port when 0 was asked for). */
   url: string;
-  /** Stop accepting, let requests in flight finish, stop the mail dispatcher, close the pool. */
+  /**
+   * Stop accepting, let requests in flight finish (also those whose client has hung up), stop the
+   * mail dispatcher, the job queue and the transport, close the pool. Ends within about 10 s.
+   */
   close(): Promise<void>;
   app: Express;
 }
@@ -42,7 +46,9 @@ export async function startServer(options: { port?: number; host?: string } = {}
   const publicUrl = process.env.PUBLIC_URL ? env.PUBLIC_URL : url;
 
   const { db, pool } = createDatabase(env.DATABASE_URL);
-  const app = createApp({ db, env: { ...env, PORT: address.port, PUBLIC_URL: publicUrl }, logger });
+  // Route work still running; close() waits for it before closing the pool (server/http/in-flight-work.ts).
+  const inFlightWork = createInFlightWork();
+  const app = createApp({ db, env: { ...env, PORT: address.port, PUBLIC_URL: publicUrl }, logger, inFlightWork });
   server.on('request', app);
 
   // Job queue and its worker (large Property spreads); JOBS_ENABLED=false leaves them off.
@@ -63,10 +69,25 @@ export async function startServer(options: { port?: number; host?: string } = {}
       const stopped = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeIdleConnections();
       // Requests still running after 10 s are cut off so shutdown always ends.
-      const force = setTimeout(() => server.closeAllConnections(), 10_000);
+      let forced = false;
+      let giveUp = () => {};
+      const gaveUp = new Promise<void>((resolve) => (giveUp = resolve));
+      const force = setTimeout(() => {
+        forced = true;
+        server.closeAllConnections();
+        giveUp();
+      }, 10_000);
       force.unref();
       await stopped;
+      // A closed connection does not stop its handler (the client may simply have hung up): wait
+      // for the route work itself, so no handler finds the pool ended under it.
+      const running = inFlightWork.count();
+      if (running > 0) logger.info({ running }, 'waiting for requests in flight to finish');
+      await Promise.race([inFlightWork.settled(), gaveUp]);
       clearTimeout(force);
+      if (forced && inFlightWork.count() > 0) {
+        logger.warn({ running: inFlightWork.count() }, 'requests still running after 10 s; closing the pool under them');
+      }
       await dispatcher.stop();
       await jobs.stop();
       transport.close();

@@ -1,6 +1,7 @@
 import type { Database } from '../db/client';
 import type { Env } from '../env';
 import type { Logger } from '../logger';
+import type { InFlightWork } from './in-flight-work';
 
 /** Throttle settings; tests pass their own so parallel files do not share one budget. */
 export interface RateLimitSettings {
@@ -19,4 +20,6 @@ export interface AppDeps {
     /** Password-reset requests, reset confirmations and invitation acceptances per client address. */
     tokenUse: RateLimitSettings;
   };
+  /** Route work still running (defineRoute counts every guarded route); shutdown waits for it. */
+  inFlightWork: InFlightWork;
 }

@@ -4,6 +4,7 @@
  *   2. for non-public actions: refuse (401) a missing, expired or inactive-user session,
  *   3. check the action against server/auth/policy.ts (403 when the role is not listed;
  *      an action missing from the policy is refused for everyone).
+ * The whole of that (and the handler) is counted in `deps.inFlightWork`, so shutdown waits for it.
  * It also records the route in `routeRegistry`, which the role-matrix test walks, and marks
  * the handler so `assertEveryApiRouteIsDefined` can catch routes added to Express directly.
  *
@@ -75,7 +76,7 @@ export function defineRoute<A extends Action>(api: ApiRouter, spec: RouteSpec<A>
   const { deps } = api;
   const options = sessionOptions(deps.env);
 
-  const guarded = async (req: Request, res: Response) => {
+  const runGuarded = async (req: Request, res: Response) => {
     const session = await loadSession(req, res, options);
     let user: CurrentUser | null = null;
     // Public routes never touch the users table, so /api/health still answers with a cookie
@@ -96,6 +97,9 @@ export function defineRoute<A extends Action>(api: ApiRouter, spec: RouteSpec<A>
     const ctx = { ...deps, session, user, requestId: String(req.id ?? '') } as RouteContext<A>;
     await spec.handler(req, res, ctx);
   };
+  // The whole body (session, user lookup, handler) is counted in deps.inFlightWork: a client that
+  // disconnects does not stop it, and shutdown must not close the pool under it (server/index.ts).
+  const guarded = (req: Request, res: Response) => deps.inFlightWork.run(() => runGuarded(req, res));
   Object.defineProperty(guarded, DEFINED_ROUTE, { value: true });
   api.router[spec.method](spec.path, ...(spec.before ?? []), guarded);
 }
