@@ -11,6 +11,9 @@ export interface CollocationWorkspace {
   readonly kmat: Float64Array;
   readonly re: Float64Array;
   readonly im: Float64Array;
+  /** Power-iteration vectors (dominantPositiveEigenvalue). */
+  readonly power: Float64Array;
+  readonly product: Float64Array;
 }
 
 /**
@@ -20,7 +23,7 @@ export interface CollocationWorkspace {
  * ## Method
  * n×n arrays for the thermal and mechanical operators, the right-hand sides (at most n − 3
  * columns: the tangential-stress row and the n − 4 interior rows) and the reduced matrix; length-n
- * vectors for the deflection functional and the eigenvalues. One set per collocation order is shared
+ * vectors for the deflection functional, the eigenvalues and the power iteration. One set per collocation order is shared
  * by every evaluator (see createMarginalFactorEvaluator): the kernel is synchronous and every call
  * overwrites what it uses before reading it.
  *
@@ -44,5 +47,7 @@ export function createCollocationWorkspace(size: number): CollocationWorkspace {
     kmat: square(),
     re: new Float64Array(size),
     im: new Float64Array(size),
+    power: new Float64Array(size),
+    product: new Float64Array(size),
   });
 }
