@@ -1,10 +1,42 @@
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../db/client';
 import { users } from '../db/schema';
 import type { Me } from '../../shared/schemas/auth';
 
 /** The signed-in person for this request, reloaded from the database every time. */
 export type CurrentUser = Me;
+
+function buildSessionUserQuery(db: DbOrTx) {
+  return db
+    .select({
+      id: users.id,
+      email: users.email,
+      displayName: users.displayName,
+      role: users.role,
+      active: users.active,
+      sessionsValidAfter: users.sessionsValidAfter,
+    })
+    .from(users)
+    .where(eq(users.id, sql.placeholder('userId')))
+    .limit(1)
+    .prepare('quietlayer_session_user');
+}
+
+/**
+ * The session lookup runs on every signed-in request: it is built once per database handle and
+ * sent as a named prepared statement, so neither the query builder nor PostgreSQL's parser and
+ * planner repeat the work for each request.
+ */
+const sessionUserQueries = new WeakMap<DbOrTx, ReturnType<typeof buildSessionUserQuery>>();
+
+function sessionUserQuery(db: DbOrTx) {
+  let query = sessionUserQueries.get(db);
+  if (query === undefined) {
+    query = buildSessionUserQuery(db);
+    sessionUserQueries.set(db, query);
+  }
+  return query;
+}
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -15,18 +47,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
  */
 export async function loadSessionUser(db: DbOrTx, userId: string, issuedAt: number): Promise<CurrentUser | null> {
   if (!UUID.test(userId)) return null;
-  const [row] = await db
-    .select({
-      id: users.id,
-      email: users.email,
-      displayName: users.displayName,
-      role: users.role,
-      active: users.active,
-      sessionsValidAfter: users.sessionsValidAfter,
-    })
-    .from(users)
-    .where(eq(users.id, userId))
-    .limit(1);
+  const [row] = await sessionUserQuery(db).execute({ userId });
   if (!row || !row.active) return null;
   if (row.sessionsValidAfter && issuedAt < row.sessionsValidAfter.getTime()) return null;
   return { id: row.id, email: row.email, displayName: row.displayName, role: row.role };

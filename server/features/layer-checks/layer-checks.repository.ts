@@ -109,11 +109,24 @@ export async function findRevisions(db: DbOrTx, checkId: string) {
 }
 
 /** The one lookup evaluate needs: the fluid's laws and whether it is archived. */
-export async function findFluidLaws(db: DbOrTx, id: string) {
-  const [row] = await db
+function buildFluidLawsQuery(db: DbOrTx) {
+  return db
     .select({ laws: fluids.laws, archived: fluids.archived, name: fluids.name })
     .from(fluids)
-    .where(eq(fluids.id, id))
-    .limit(1);
+    .where(eq(fluids.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare('quietlayer_fluid_laws');
+}
+
+/** Built once per database handle: the evaluate endpoint looks a fluid up on every request. */
+const fluidLawsQueries = new WeakMap<DbOrTx, ReturnType<typeof buildFluidLawsQuery>>();
+
+export async function findFluidLaws(db: DbOrTx, id: string) {
+  let query = fluidLawsQueries.get(db);
+  if (query === undefined) {
+    query = buildFluidLawsQuery(db);
+    fluidLawsQueries.set(db, query);
+  }
+  const [row] = await query.execute({ id });
   return row;
 }
