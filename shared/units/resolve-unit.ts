@@ -22,6 +22,25 @@ import { unitMath } from './unit-math';
  * @example resolveUnit('cP', 'dynamicViscosity').unit.toNumber('Pa s') // 0.001
  */
 export function resolveUnit(unitText: string, kind: QuantityKind): { unit: Unit; normalized: string } {
+  const key = `${kind}\u0000${unitText}`;
+  const known = RESOLVED.get(key);
+  if (known !== undefined) return known;
+  const resolved = Object.freeze(resolveUnitUncached(unitText, kind));
+  if (RESOLVED.size >= RESOLVED_LIMIT) RESOLVED.clear();
+  RESOLVED.set(key, resolved);
+  return resolved;
+}
+
+/**
+ * Units already resolved, by kind and text (a form sends the same few units again and again, and
+ * parsing one with the unit library costs more than the rest of reading a quantity). A pure memo:
+ * the answer depends on the text and kind alone; failures are not kept (they throw every time).
+ * Bounded: emptied when it reaches RESOLVED_LIMIT entries.
+ */
+const RESOLVED = new Map<string, Readonly<{ unit: Unit; normalized: string }>>();
+const RESOLVED_LIMIT = 1000;
+
+function resolveUnitUncached(unitText: string, kind: QuantityKind): { unit: Unit; normalized: string } {
   const info = quantityKinds[kind];
   const normalized = normalizeUnitText(unitText, kind);
   if (normalized === '') throw new UnitError(info.label, unitText, info.units, 'no unit given');

@@ -157,3 +157,17 @@ describe('parse and format round trip (property-based)', () => {
     );
   });
 });
+
+describe('resolveUnit memo: the same answer every time, and errors never kept', () => {
+  it('1 cP = 1e-3 Pa·s on the first and the second reading (NIST SP 811 App. B.8), and a wrong unit throws each time', async () => {
+    const { resolveUnit } = await import('./resolve-unit');
+    const first = resolveUnit('cP', 'dynamicViscosity');
+    const second = resolveUnit('cP', 'dynamicViscosity');
+    expect(second).toBe(first);
+    expect(second.unit.toNumber('Pa s')).toBeCloseTo(1e-3, 15);
+    expect(parseQuantity('12 cP', 'dynamicViscosity')).toBeCloseTo(0.012, 15);
+    for (let i = 0; i < 2; i++) expect(() => resolveUnit('mN/m', 'dynamicViscosity')).toThrow(UnitError);
+    // The same text is a different question for another kind.
+    expect(() => resolveUnit('cP', 'surfaceTension')).toThrow(UnitError);
+  });
+});
