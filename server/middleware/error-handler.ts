@@ -73,6 +73,18 @@ export function createErrorHandler(logger: Logger): ErrorRequestHandler {
       send(413, 'payload_too_large', 'The request body is too large.');
       return;
     }
+    // The client hung up while its body was still arriving, or sent fewer/more bytes than its
+    // Content-Length: the client's doing, not ours. Nobody may be listening for the answer.
+    if (type === 'request.aborted') {
+      (req.log ?? logger).info({ code: 'request_aborted' }, 'client closed the connection before sending the whole body');
+      send(400, 'request_aborted', 'The request body was not received in full.');
+      return;
+    }
+    if (type === 'request.size.invalid') {
+      (req.log ?? logger).warn({ code: 'request_size_invalid' }, 'request body length did not match Content-Length');
+      send(400, 'request_size_invalid', 'The request body length does not match its Content-Length header.');
+      return;
+    }
     if (type === 'encoding.unsupported' || type === 'charset.unsupported') {
       send(415, 'unsupported_media_type', 'The request body encoding is not supported.');
       return;
