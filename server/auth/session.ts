@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { getIronSession, type IronSession, type SessionOptions } from 'iron-session';
 import type { Env } from '../env';
@@ -9,6 +10,12 @@ export interface SessionData {
   userId?: string;
   /** Milliseconds since the epoch when this session was created at sign-in. */
   issuedAt?: number;
+  /**
+   * Random id (UUID) given at sign-in, so that signing out can end this session on the server
+   * (table ended_sessions). Cookies sealed before ids existed have none; they are accepted until
+   * they expire, but signing out cannot end them early.
+   */
+  sessionId?: string;
 }
 
 export type Session = IronSession<SessionData>;
@@ -36,13 +43,21 @@ export function isSessionExpired(session: SessionData, ttlSeconds: number, now =
   return now - session.issuedAt > ttlSeconds * 1000;
 }
 
+/** When the server stops accepting this session (issuedAt + ttl), or null without a usable issuedAt. */
+export function sessionExpiresAt(session: SessionData, ttlSeconds: number): Date | null {
+  if (typeof session.issuedAt !== 'number' || !Number.isFinite(session.issuedAt)) return null;
+  return new Date(session.issuedAt + ttlSeconds * 1000);
+}
+
 /**
  * Start a brand-new session for `userId`: the old contents are dropped and a fresh seal
- * (new salt, new issuedAt) is written, so a cookie planted before sign-in is never promoted.
+ * (new salt, new issuedAt, new random session id) is written, so a cookie planted before
+ * sign-in is never promoted.
  */
 export async function startFreshSession(session: Session, userId: string, now = Date.now()): Promise<void> {
   for (const key of Object.keys(session) as (keyof SessionData)[]) delete session[key];
   session.userId = userId;
   session.issuedAt = now;
+  session.sessionId = randomUUID();
   await session.save();
 }

@@ -85,7 +85,7 @@ export function defineRoute<A extends Action>(api: ApiRouter, spec: RouteSpec<A>
       if (isSessionExpired(session, deps.env.SESSION_TTL_SECONDS)) {
         session.destroy();
       } else {
-        user = await loadSessionUser(deps.db, session.userId, session.issuedAt as number);
+        user = await loadSessionUser(deps.db, session.userId, session.issuedAt as number, session.sessionId);
         if (!user) session.destroy();
       }
     }

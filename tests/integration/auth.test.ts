@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { sealData } from 'iron-session';
 import { eq } from 'drizzle-orm';
-import { users } from '../../server/db/schema';
+import { endedSessions, users } from '../../server/db/schema';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, sessionCookieFrom, signedInAgent, uniqueEmail } from './helpers/users';
 
@@ -81,6 +81,39 @@ describe('sign-in', () => {
     expect((await agent.post('/api/auth/sign-out')).status).toBe(204);
   });
 
+  it('sign-out ends that session on the server: a copy of its cookie gets 401, another session of the user stays signed in', async () => {
+    const user = await createTestUser(ctx.db);
+    const first = request.agent(ctx.app);
+    const signIn = await first.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const copied = sessionCookieFrom(signIn.headers)!.split(';')[0];
+    const second = await signedInAgent(ctx.app, user);
+    expect((await request(ctx.app).get('/api/me').set('Cookie', copied)).status).toBe(200);
+
+    expect((await first.post('/api/auth/sign-out')).status).toBe(204);
+
+    const replay = await request(ctx.app).get('/api/me').set('Cookie', copied);
+    expect(replay.status).toBe(401);
+    expect(replay.body.error.code).toBe('unauthenticated');
+    expect((await second.get('/api/me')).status).toBe(200);
+    const rows = await ctx.db.select().from(endedSessions).where(eq(endedSessions.userId, user.id));
+    expect(rows).toHaveLength(1);
+    // Ends when the cookie would have expired anyway: issuedAt + 8 h.
+    const hoursLeft = (rows[0].expiresAt.getTime() - Date.now()) / 3600_000;
+    expect(hoursLeft).toBeGreaterThan(7.9);
+    expect(hoursLeft).toBeLessThanOrEqual(8);
+  });
+
+  it('sign-out deletes ended-session rows whose cookies have expired', async () => {
+    const user = await createTestUser(ctx.db);
+    const stale = crypto.randomUUID();
+    await ctx.db.insert(endedSessions).values({ sessionId: stale, userId: user.id, expiresAt: new Date(Date.now() - 60_000) });
+    const agent = await signedInAgent(ctx.app, user);
+    expect((await agent.post('/api/auth/sign-out')).status).toBe(204);
+    const left = await ctx.db.select({ sessionId: endedSessions.sessionId }).from(endedSessions).where(eq(endedSessions.userId, user.id));
+    expect(left.map((row) => row.sessionId)).not.toContain(stale);
+    expect(left).toHaveLength(1);
+  });
+
   it('ends the session of a user who is deactivated meanwhile', async () => {
     const user = await createTestUser(ctx.db);
     const agent = await signedInAgent(ctx.app, user);
@@ -103,6 +136,23 @@ describe('session expiry (8 h, checked on the server)', () => {
       .get('/api/me')
       .set('Cookie', await cookieFor({ userId: user.id, issuedAt: Date.now() - 60_000 }));
     expect(response.status).toBe(200);
+  });
+
+  it('keeps accepting a cookie sealed before sessions had ids until it expires; signing out with it records nothing', async () => {
+    const user = await createTestUser(ctx.db);
+    const legacy = await cookieFor({ userId: user.id, issuedAt: Date.now() - 60_000 });
+    expect((await request(ctx.app).get('/api/me').set('Cookie', legacy)).status).toBe(200);
+    expect((await request(ctx.app).post('/api/auth/sign-out').set('Cookie', legacy)).status).toBe(204);
+    expect(await ctx.db.select().from(endedSessions).where(eq(endedSessions.userId, user.id))).toEqual([]);
+  });
+
+  it('refuses a sealed session whose id was ended, even for a well-formed cookie', async () => {
+    const user = await createTestUser(ctx.db);
+    const sessionId = crypto.randomUUID();
+    const cookie = await cookieFor({ userId: user.id, issuedAt: Date.now() - 60_000, sessionId });
+    expect((await request(ctx.app).get('/api/me').set('Cookie', cookie)).status).toBe(200);
+    await ctx.db.insert(endedSessions).values({ sessionId, userId: user.id, expiresAt: new Date(Date.now() + 3600_000) });
+    expect((await request(ctx.app).get('/api/me').set('Cookie', cookie)).status).toBe(401);
   });
 
   it('refuses a validly sealed session whose issuedAt is more than 8 hours old', async () => {

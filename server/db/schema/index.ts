@@ -6,3 +6,4 @@ export * from './layer-checks';
 export * from './beyond-onset';
 export * from './sheets';
 export * from './gauge-log';
+export * from './sessions';

@@ -1,6 +1,6 @@
 import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { passwordResetTokens, users } from '../../db/schema';
+import { endedSessions, passwordResetTokens, users } from '../../db/schema';
 
 export type UserRow = typeof users.$inferSelect;
 
@@ -78,4 +78,18 @@ export async function setPassword(db: DbOrTx, userId: string, passwordHash: stri
     .update(users)
     .set({ passwordHash, failedSignIns: 0, lockedUntil: null, sessionsValidAfter, updatedAt: sql`now()` })
     .where(eq(users.id, userId));
+}
+
+/**
+ * Records a signed-out session so its cookie is refused from now on (server/auth/current-user.ts),
+ * and in the same statement deletes rows whose cookies have expired anyway. Inserting through a
+ * select on users keeps a session of a since-removed user from failing on the foreign key.
+ */
+export async function insertEndedSession(db: DbOrTx, values: { sessionId: string; userId: string; expiresAt: Date }): Promise<void> {
+  await db.execute(sql`
+    with pruned as (delete from ${endedSessions} where ${endedSessions.expiresAt} < now())
+    insert into ${endedSessions} (session_id, user_id, expires_at)
+    select ${values.sessionId}::uuid, ${users.id}, ${values.expiresAt.toISOString()}::timestamptz
+      from ${users} where ${users.id} = ${values.userId}::uuid
+    on conflict (session_id) do nothing`);
 }

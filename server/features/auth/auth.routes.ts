@@ -6,7 +6,7 @@ import {
 import { startFreshSession } from '../../auth/session';
 import { defineRoute, type ApiRouter } from '../../http/define-route';
 import { createAddressRateLimit } from '../../http/rate-limit';
-import { confirmPasswordReset, requestPasswordReset, signIn } from './auth.service';
+import { confirmPasswordReset, endSession, requestPasswordReset, signIn } from './auth.service';
 
 export function registerAuthRoutes(api: ApiRouter): void {
   const signInLimit = createAddressRateLimit(api.deps.rateLimits.signIn);
@@ -29,7 +29,11 @@ export function registerAuthRoutes(api: ApiRouter): void {
     method: 'post',
     path: '/api/auth/sign-out',
     action: 'auth.sign-out',
-    handler: (_req, res, ctx) => {
+    handler: async (_req, res, ctx) => {
+      // Recorded before the cookie is cleared: if the database cannot be reached the answer is 503
+      // and the browser keeps its cookie, so signing out can be tried again rather than only
+      // seeming to work while a copied cookie stays valid.
+      await endSession(ctx.db, ctx.env, ctx.session);
       ctx.session.destroy();
       res.status(204).end();
     },

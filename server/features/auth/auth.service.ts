@@ -4,12 +4,14 @@ import { InvalidCredentialsError, InvalidTokenError, TooManyRequestsError } from
 import { enqueueMail } from '../../mail/enqueue-mail';
 import { hashPassword, spendPasswordCheckTime, verifyPassword } from '../../auth/passwords';
 import { createToken, hashToken, PASSWORD_RESET_TTL_MS } from '../../auth/tokens';
+import { isSessionExpired, sessionExpiresAt, type SessionData } from '../../auth/session';
 import type { Me } from '../../../shared/schemas/auth';
 import { recordAuditEvent } from '../audit/record-audit-event';
 import {
   claimPasswordResetToken,
   clearFailedSignIns,
   findUserByEmail,
+  insertEndedSession,
   insertPasswordResetToken,
   markPasswordResetTokensUsed,
   recordFailedSignIn,
@@ -133,4 +135,20 @@ export async function confirmPasswordReset(
       requestId: meta.requestId,
     });
   });
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Sign-out, server side: remember this session's id until the cookie would expire anyway, so a
+ * copy of the cookie taken before sign-out is refused. Nothing to do for a session that has no
+ * id (sealed before ids were given), no user, or has already expired.
+ */
+export async function endSession(db: Database, env: Pick<Env, 'SESSION_TTL_SECONDS'>, session: SessionData, now = Date.now()): Promise<void> {
+  const { sessionId, userId } = session;
+  if (!sessionId || !userId || !UUID.test(sessionId) || !UUID.test(userId)) return;
+  if (isSessionExpired(session, env.SESSION_TTL_SECONDS, now)) return;
+  const expiresAt = sessionExpiresAt(session, env.SESSION_TTL_SECONDS);
+  if (!expiresAt) return;
+  await insertEndedSession(db, { sessionId, userId, expiresAt });
 }
