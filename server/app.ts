@@ -67,6 +67,7 @@ export function createApp(input: CreateAppDeps): Express {
 
   const app = express();
   app.disable('x-powered-by');
+  app.set('trust proxy', input.env.TRUST_PROXY);
   app.use(securityHeaders(input.env));
   app.use(
     pinoHttp({

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { z } from 'zod';
 
 /**
@@ -9,6 +10,64 @@ export const DEVELOPMENT_SESSION_SECRET = 'quietlayer-development-secret-do-not-
 const booleanFromString = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'], { error: 'must be true or false' })
   .transform((value) => value === 'true' || value === '1' || value === 'yes');
+
+/** Express's "trust proxy" value: off, every hop, the first n hops, or these addresses/subnets. */
+export type TrustProxy = boolean | number | string[];
+
+/** Names proxy-addr (Express's "trust proxy") understands as address ranges. */
+const TRUST_PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+const MAX_TRUST_PROXY_HOPS = 10;
+
+/** True for an IPv4 dotted mask whose one-bits are contiguous (255.255.255.0, not 255.0.255.0). */
+function isContiguousMask(mask: string): boolean {
+  const bits = mask
+    .split('.')
+    .map((part) => Number(part).toString(2).padStart(8, '0'))
+    .join('');
+  return /^1*0*$/.test(bits);
+}
+
+function isTrustedProxyEntry(entry: string): boolean {
+  if (TRUST_PROXY_NAMES.has(entry)) return true;
+  const [address, range, extra] = entry.split('/');
+  if (extra !== undefined) return false;
+  const family = isIP(address);
+  if (family === 0) return false;
+  if (range === undefined) return true;
+  if (/^\d{1,3}$/.test(range)) return Number(range) <= (family === 4 ? 32 : 128);
+  return family === 4 && isIP(range) === 4 && isContiguousMask(range);
+}
+
+const TRUST_PROXY_HELP =
+  `TRUST_PROXY must be false, true, a hop count (0–${MAX_TRUST_PROXY_HOPS}) or a comma-separated list of proxy ` +
+  'addresses/subnets (e.g. loopback, 10.0.0.0/8, 203.0.113.7)';
+
+/**
+ * Parses TRUST_PROXY the way Express reads its "trust proxy" setting: 'false' (default: the socket
+ * address is the client), 'true' (trust every X-Forwarded-For hop; only when no client can reach the
+ * server except through the proxy), a hop count, or addresses/subnets of the proxies.
+ */
+const trustProxySchema = z
+  .string()
+  .default('false')
+  .transform((text, ctx): TrustProxy => {
+    const value = text.trim();
+    if (value === 'false') return false;
+    if (value === 'true') return true;
+    if (/^\d+$/.test(value)) {
+      const hops = Number(value);
+      if (hops <= MAX_TRUST_PROXY_HOPS) return hops;
+      ctx.addIssue({ code: 'custom', message: `TRUST_PROXY hop count must be at most ${MAX_TRUST_PROXY_HOPS} (got ${value})` });
+      return z.NEVER;
+    }
+    const entries = value.split(',').map((entry) => entry.trim());
+    const bad = entries.filter((entry) => !isTrustedProxyEntry(entry));
+    if (bad.length > 0) {
+      ctx.addIssue({ code: 'custom', message: `${TRUST_PROXY_HELP}; not an address or subnet: ${bad.map((b) => JSON.stringify(b)).join(', ')}` });
+      return z.NEVER;
+    }
+    return entries;
+  });
 
 const rawEnvSchema = z.object({
   DATABASE_URL: z
@@ -25,6 +84,7 @@ const rawEnvSchema = z.object({
   SMTP_FAKE_PORT: z.coerce.number().int().min(0).max(65_535).default(2525),
   MAIL_FROM: z.string().min(3).default('QuietLayer <no-reply@larkspur.example>'),
   COOKIE_SECURE: booleanFromString.default(false),
+  TRUST_PROXY: trustProxySchema,
   BCRYPT_COST: z.coerce.number().int().min(4, 'BCRYPT_COST must be at least 4').max(15, 'BCRYPT_COST must be at most 15').default(12),
   SESSION_TTL_SECONDS: z.coerce.number().int().min(60, 'SESSION_TTL_SECONDS must be at least 60').max(7 * 24 * 3600).default(28_800),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
