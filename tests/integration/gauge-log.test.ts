@@ -317,3 +317,30 @@ describe('gauge log: nonconformance notes', () => {
     expect(paused.status).toBe(429);
   });
 });
+
+describe('gauge log: readings are append-only QA records', () => {
+  it('refuses a direct SQL UPDATE or DELETE of a reading or its batch with the trigger message; importing still works', async () => {
+    const own = await createReleasedCheck(ctx.db, engineerAgent, engineer.id);
+    const first = await upload(technicianAgent, own.revisionId, goodCsv);
+    expect(first.status).toBe(201);
+    const [reading] = await ctx.db.select().from(gaugeReadings).where(eq(gaugeReadings.revisionId, own.revisionId)).limit(1);
+
+    await expect(ctx.pool.query('update gauge_readings set wet_thickness = 1e-6 where id = $1', [reading.id])).rejects.toThrow(
+      'gauge_readings is append-only: UPDATE is not allowed',
+    );
+    await expect(ctx.pool.query('delete from gauge_readings where id = $1', [reading.id])).rejects.toThrow(
+      'gauge_readings is append-only: DELETE is not allowed',
+    );
+    await expect(ctx.pool.query('update gauge_batches set over_count = 0 where id = $1', [reading.batchId])).rejects.toThrow(
+      'gauge_batches is append-only: UPDATE is not allowed',
+    );
+    await expect(ctx.pool.query('truncate gauge_readings')).rejects.toThrow('gauge_readings is append-only: TRUNCATE is not allowed');
+    const [unchanged] = await ctx.db.select().from(gaugeReadings).where(eq(gaugeReadings.id, reading.id));
+    expect(unchanged).toEqual(reading);
+
+    const second = await upload(technicianAgent, own.revisionId, goodCsv);
+    expect(second.status).toBe(201);
+    const saved = await ctx.db.select({ id: gaugeReadings.id }).from(gaugeReadings).where(eq(gaugeReadings.revisionId, own.revisionId));
+    expect(saved).toHaveLength(8);
+  });
+});
