@@ -214,6 +214,47 @@ describe('fluid library and layer check in the browser', () => {
     }
   }, E2E_TIMEOUT);
 
+  it('"Only my checks" keeps the engineer\'s own checks and stays in the address; a technician who owns none sees why the list is empty', async () => {
+    const { context, page } = await newPage(browser, app.url);
+    try {
+      await signIn(page, 'engineer@larkspur.example');
+      await page.goto('/layer-checks');
+      await page.getByRole('table').waitFor();
+      // The box follows the address, which changes once the filtered page has loaded: click, then wait.
+      await page.getByLabel('Only my checks').click();
+      await page.waitForURL(/owner=me/);
+      await page.getByRole('table').waitFor();
+      // Owner is the seventh column (Title, Process, Fluid, Depth, Saved margin, Regime, Owner, …).
+      const owners = await page.locator('tbody tr td:nth-child(7)').allInnerTexts();
+      expect(owners.length).toBeGreaterThan(0);
+      expect(new Set(owners)).toEqual(new Set(['Priya Natarajan (Process engineer)']));
+      expect(await wcagViolations(page)).toEqual([]);
+      // Sorting by the saved margin goes to the server and into the address; the rows come back in order.
+      await page.getByRole('button', { name: /Saved margin/ }).click();
+      await page.waitForURL(/sort=margin/);
+      await page.locator('th[aria-sort]', { hasText: 'Saved margin' }).waitFor();
+      const direction = new URL(page.url()).searchParams.get('dir');
+      const margins = (await page.locator('tbody tr td:nth-child(5)').allInnerTexts())
+        .map((text) => (text.startsWith('no onset') ? Infinity : Number.parseFloat(text)));
+      const ordered = [...margins].sort((a, b) => (direction === 'desc' ? b - a : a - b));
+      expect(margins).toEqual(ordered);
+      await screenshotWholePage(page, 'layer-checks-mine');
+      await page.reload();
+      expect(await page.getByLabel('Only my checks').isChecked()).toBe(true);
+    } finally {
+      await context.close();
+    }
+    const technician = await newPage(browser, app.url);
+    try {
+      await signIn(technician.page, 'technician@larkspur.example');
+      await technician.page.goto('/layer-checks?owner=me');
+      await technician.page.getByText('“Only my checks”', { exact: false }).waitFor();
+      expect(await technician.page.getByRole('table').count()).toBe(0);
+    } finally {
+      await technician.context.close();
+    }
+  }, E2E_TIMEOUT);
+
   it('a stale save is refused: the second engineer is told someone saved a newer revision and can reload it', async () => {
     expect(checkUrl).toMatch(/^\/layer-checks\//);
     const first = await newPage(browser, app.url);

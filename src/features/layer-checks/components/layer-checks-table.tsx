@@ -35,21 +35,25 @@ interface LayerChecksTableProps {
 export function LayerChecksTable({ checks, system, sorting, onSortingChange, busy }: LayerChecksTableProps) {
   const columns = useMemo<ColumnDef<LayerCheckSummary>[]>(
     () => [
+      // The sortable columns carry an accessor: the table only offers a sort button for those (the
+      // server does the sorting, by the column id).
       {
         id: 'title',
         header: 'Title',
+        accessorFn: (check) => check.title,
         cell: ({ row }) => (
           <Link to={`${paths.layerChecks}/${row.original.id}`} className="font-medium text-brand-dark underline-offset-2 hover:underline">
             {row.original.title}
           </Link>
         ),
       },
-      { id: 'processKind', header: 'Process', cell: ({ row }) => processKindLabels[row.original.processKind] },
+      { id: 'processKind', header: 'Process', accessorFn: (check) => check.processKind, cell: ({ row }) => processKindLabels[row.original.processKind] },
       { id: 'fluid', header: 'Fluid', enableSorting: false, meta: { className: 'hidden md:table-cell' }, cell: ({ row }) => row.original.fluidName },
-      { id: 'depth', header: 'Depth', meta: { className: 'text-right whitespace-nowrap tabular-nums' }, cell: ({ row }) => formatInSystem(row.original.depthSi, 'length', system, 3) },
+      { id: 'depth', header: 'Depth', accessorFn: (check) => check.depthSi, meta: { className: 'text-right whitespace-nowrap tabular-nums' }, cell: ({ row }) => formatInSystem(row.original.depthSi, 'length', system, 3) },
       {
         id: 'margin',
         header: 'Saved margin',
+        accessorFn: (check) => check.savedMargin,
         meta: { className: 'whitespace-nowrap' },
         cell: ({ row }) => {
           const { tone, word } = savedMarginTone(row.original.savedMargin);
@@ -64,7 +68,7 @@ export function LayerChecksTable({ checks, system, sorting, onSortingChange, bus
       { id: 'regime', header: 'Regime', enableSorting: false, meta: { className: 'hidden lg:table-cell' }, cell: ({ row }) => regimeLabel(row.original.savedRegime) },
       { id: 'owner', header: 'Owner', enableSorting: false, meta: { className: 'hidden xl:table-cell' }, cell: ({ row }) => row.original.ownerName ?? '—' },
       { id: 'revision', header: 'Rev.', enableSorting: false, meta: { className: 'text-right tabular-nums' }, cell: ({ row }) => row.original.revision },
-      { id: 'updatedAt', header: 'Saved', meta: { className: 'hidden lg:table-cell whitespace-nowrap' }, cell: ({ row }) => formatDateTime(row.original.updatedAt) },
+      { id: 'updatedAt', header: 'Saved', accessorFn: (check) => check.updatedAt, meta: { className: 'hidden lg:table-cell whitespace-nowrap' }, cell: ({ row }) => formatDateTime(row.original.updatedAt) },
     ],
     [system],
   );
