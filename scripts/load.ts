@@ -8,7 +8,7 @@
  *   3. real sessions (signed in through POST /api/auth/sign-in), then bounded autocannon runs against
  *      POST /api/layer-checks/evaluate and the main list endpoints;
  *      (each run preceded by a 2 s warm-up of the same requests, not counted in the figures);
- *   4. req/s, p50/p99 latency and errors printed against the targets (issue 8: ≥ 300 evaluate req/s with
+ *   4. req/s, p50/p99 latency, the server process's CPU time per request and errors printed against the targets (issue 8: ≥ 300 evaluate req/s with
  *      p99 ≤ 50 ms; list pages p99 ≤ 100 ms with 10,000 checks; no errors). A miss is printed as MISSED;
  *      the exit code is 0 unless the run itself failed (or some request errored, with --strict).
  *
@@ -79,6 +79,13 @@ async function serve(): Promise<void> {
   const { startServer } = await import('../server/index');
   const started = await startServer({ port: 0, host: '127.0.0.1' });
   process.send?.({ url: started.url });
+  // The parent asks for this process's CPU time around each run, to report CPU per request.
+  process.on('message', (message: { cpu?: boolean }) => {
+    if (message?.cpu) {
+      const used = process.cpuUsage();
+      process.send?.({ cpuMicroseconds: used.user + used.system });
+    }
+  });
   const stop = () => void started.close().then(() => process.exit(0), () => process.exit(1));
   process.on('SIGTERM', stop);
   process.on('disconnect', stop);
@@ -160,6 +167,24 @@ async function signIn(url: string, email: string): Promise<string> {
   return cookie.split(';')[0];
 }
 
+/** The server child, once started (for its CPU time). */
+let serverChild: ChildProcess | undefined;
+
+/** CPU time (user + system) the server process has used so far [µs], asked over IPC. */
+function serverCpuMicroseconds(): Promise<number> {
+  const child = serverChild;
+  if (!child) return Promise.resolve(NaN);
+  return new Promise((resolve) => {
+    const onMessage = (message: { cpuMicroseconds?: number }) => {
+      if (typeof message?.cpuMicroseconds !== 'number') return;
+      child.off('message', onMessage);
+      resolve(message.cpuMicroseconds);
+    };
+    child.on('message', onMessage);
+    child.send({ cpu: true });
+  });
+}
+
 async function run(
   label: string,
   options: LoadOptions,
@@ -169,14 +194,16 @@ async function run(
   // compiled its code paths, which says nothing about steady service. Errors here still count.
   const warmUp = await autocannon({ ...options, duration: WARM_UP_SECONDS, timeout: 10 });
   const warmUpErrors = warmUp.errors + warmUp.timeouts + warmUp.non2xx;
+  const cpuBefore = await serverCpuMicroseconds();
   const result = await autocannon({ ...options, connections: options.connections, timeout: 10 });
+  const cpuPerRequest = ((await serverCpuMicroseconds()) - cpuBefore) / 1000 / Math.max(1, result.requests.total);
   const errors = result.errors + result.timeouts + result.non2xx + warmUpErrors;
   const summary = { rps: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors };
   const verdict = judge(summary);
   const line: RunResult = { label, ...summary, requests: result.requests.total, verdict };
   console.log(
     `  ${label.padEnd(52)} ${summary.rps.toFixed(0).padStart(6)} req/s  p50 ${String(summary.p50).padStart(4)} ms  p99 ${String(summary.p99).padStart(5)} ms  ` +
-      `errors ${errors}/${result.requests.total}  ${verdict}`,
+      `server CPU ${cpuPerRequest.toFixed(2)} ms/req  errors ${errors}/${result.requests.total}  ${verdict}`,
   );
   return line;
 }
@@ -240,6 +267,7 @@ async function main(): Promise<void> {
       PUBLIC_URL: '',
     });
     child = server.child;
+    serverChild = server.child;
     const { url } = server;
     const engineer = await signIn(url, 'engineer@larkspur.example');
     const admin = await signIn(url, 'admin@larkspur.example');
