@@ -5,7 +5,7 @@
  */
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { buildClientIfStale } from '../../../scripts/lib/build-client';
+import { buildClientIfStale, clientBuildIsStale } from '../../../scripts/lib/build-client';
 import { projectRoot } from '../../../scripts/lib/project-root';
 import { runDemoSeed } from '../../../scripts/lib/seed/run-demo-seed';
 import { createDatabase } from '../../../server/db/client';
@@ -21,7 +21,12 @@ export interface TestApp {
 
 export async function startTestApp(): Promise<TestApp> {
   // `npm test` builds the client first; a direct `npx vitest run tests/e2e` builds it here once.
+  // A stale build is not rebuilt here (parallel test files would build into dist/ at the same time),
+  // but it is named, so nobody reads a browser test of old client code as a test of the new.
   if (!existsSync(join(projectRoot, 'dist', 'client', 'index.html'))) await buildClientIfStale();
+  else if (clientBuildIsStale()) {
+    console.warn('dist/client is older than its sources: these browser tests run the old client. Run `npm run build` first (npm test does).');
+  }
 
   const database = await createScratchDatabase();
   await runDemoSeed(database.url, { bcryptCost: 4, log: () => {} });
