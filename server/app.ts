@@ -34,17 +34,25 @@ import { registerGaugeLogRoutes } from './features/gauge-log/gauge-log.routes';
 /** Largest JSON body accepted; bigger ones get 413 'payload_too_large'. */
 export const JSON_BODY_LIMIT = '1mb';
 
-/** Defaults: 20 sign-in attempts and 30 token uses per client address per 15 minutes. */
+/**
+ * Defaults: 20 sign-in attempts and 30 token uses per client address per 15 minutes, counted in the
+ * database under one key prefix so every server process shares them.
+ */
 export const DEFAULT_RATE_LIMITS: AppDeps['rateLimits'] = {
   signIn: { windowMs: 15 * 60 * 1000, limit: 20 },
   tokenUse: { windowMs: 15 * 60 * 1000, limit: 30 },
+  keyPrefix: 'quietlayer',
 };
 
 export interface CreateAppDeps {
   db: Database;
   env: Env;
   logger?: Logger;
-  rateLimits?: Partial<{ signIn: RateLimitSettings; tokenUse: RateLimitSettings }>;
+  /**
+   * Own throttles (tests). Without a keyPrefix they get a random one, so their counts in the shared
+   * database start from zero and no other app's requests from the same address use them up.
+   */
+  rateLimits?: Partial<{ signIn: RateLimitSettings; tokenUse: RateLimitSettings; keyPrefix: string }>;
   /** Folder with the built client (index.html); defaults to <project>/dist/client. Served only if it exists. */
   clientDir?: string;
   /** Tracker of running route work; startServer passes its own so shutdown can wait for it. */
@@ -61,7 +69,11 @@ export function createApp(input: CreateAppDeps): Express {
     db: input.db,
     env: input.env,
     logger,
-    rateLimits: { ...DEFAULT_RATE_LIMITS, ...input.rateLimits },
+    rateLimits: {
+      signIn: input.rateLimits?.signIn ?? DEFAULT_RATE_LIMITS.signIn,
+      tokenUse: input.rateLimits?.tokenUse ?? DEFAULT_RATE_LIMITS.tokenUse,
+      keyPrefix: input.rateLimits?.keyPrefix ?? (input.rateLimits ? `app-${randomUUID()}` : DEFAULT_RATE_LIMITS.keyPrefix),
+    },
     inFlightWork: input.inFlightWork ?? createInFlightWork(),
   };
 

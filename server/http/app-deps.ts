@@ -19,6 +19,11 @@ export interface AppDeps {
     signIn: RateLimitSettings;
     /** Password-reset requests, reset confirmations and invitation acceptances per client address. */
     tokenUse: RateLimitSettings;
+    /**
+     * Start of every rate-limit key in the database. Processes with the same prefix share one budget
+     * per address; an app with a prefix of its own (tests) counts apart from the others.
+     */
+    keyPrefix: string;
   };
   /** Route work still running (defineRoute counts every guarded route); shutdown waits for it. */
   inFlightWork: InFlightWork;

@@ -7,3 +7,4 @@ export * from './beyond-onset';
 export * from './sheets';
 export * from './gauge-log';
 export * from './sessions';
+export * from './rate-limits';

@@ -9,8 +9,8 @@ import { createAddressRateLimit } from '../../http/rate-limit';
 import { confirmPasswordReset, endSession, requestPasswordReset, signIn } from './auth.service';
 
 export function registerAuthRoutes(api: ApiRouter): void {
-  const signInLimit = createAddressRateLimit(api.deps.rateLimits.signIn);
-  const tokenLimit = createAddressRateLimit(api.deps.rateLimits.tokenUse);
+  const signInLimit = createAddressRateLimit(api.deps, 'signIn');
+  const tokenLimit = createAddressRateLimit(api.deps, 'tokenUse');
 
   defineRoute(api, {
     method: 'post',
@@ -33,7 +33,7 @@ export function registerAuthRoutes(api: ApiRouter): void {
       // Recorded before the cookie is cleared: if the database cannot be reached the answer is 503
       // and the browser keeps its cookie, so signing out can be tried again rather than only
       // seeming to work while a copied cookie stays valid.
-      await endSession(ctx.db, ctx.env, ctx.session);
+      await endSession(ctx.db, ctx.env, ctx.session, { requestId: ctx.requestId });
       ctx.session.destroy();
       res.status(204).end();
     },

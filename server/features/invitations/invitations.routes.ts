@@ -8,7 +8,7 @@ import { acceptInvitation, previewInvitation } from './invitations.service';
 const tokenParamsSchema = z.object({ token: z.string().min(20, 'token is malformed').max(200, 'token is malformed') });
 
 export function registerInvitationsRoutes(api: ApiRouter): void {
-  const tokenLimit = createAddressRateLimit(api.deps.rateLimits.tokenUse);
+  const tokenLimit = createAddressRateLimit(api.deps, 'tokenUse');
 
   defineRoute(api, {
     method: 'get',
