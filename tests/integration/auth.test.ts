@@ -103,6 +103,33 @@ describe('sign-in', () => {
     expect(hoursLeft).toBeLessThanOrEqual(8);
   });
 
+  it("records 'user.signed_out' for the signed-in user once; an anonymous or repeated sign-out records nothing", async () => {
+    const user = await createTestUser(ctx.db);
+    const agent = request.agent(ctx.app);
+    const signIn = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const copied = sessionCookieFrom(signIn.headers)!.split(';')[0];
+    const signedOut = async () =>
+      (
+        await ctx.pool.query<{ actor_id: string; actor_email: string; entity_type: string; entity_id: string; request_id: string | null }>(
+          `select actor_id, actor_email, entity_type, entity_id, request_id from audit_events
+            where action = 'user.signed_out' and entity_id = $1`,
+          [user.id],
+        )
+      ).rows;
+    expect(await signedOut()).toEqual([]);
+
+    const out = await agent.post('/api/auth/sign-out').set('X-Request-Id', 'sign-out-audit-1');
+    expect(out.status).toBe(204);
+    expect(await signedOut()).toEqual([
+      { actor_id: user.id, actor_email: user.email, entity_type: 'user', entity_id: user.id, request_id: 'sign-out-audit-1' },
+    ]);
+
+    expect((await agent.post('/api/auth/sign-out')).status).toBe(204); // cookie already cleared
+    expect((await request(ctx.app).post('/api/auth/sign-out').set('Cookie', copied)).status).toBe(204); // session already ended
+    expect((await request(ctx.app).post('/api/auth/sign-out')).status).toBe(204); // never signed in
+    expect(await signedOut()).toHaveLength(1);
+  });
+
   it('sign-out deletes ended-session rows whose cookies have expired', async () => {
     const user = await createTestUser(ctx.db);
     const stale = crypto.randomUUID();

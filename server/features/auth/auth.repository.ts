@@ -84,12 +84,15 @@ export async function setPassword(db: DbOrTx, userId: string, passwordHash: stri
  * Records a signed-out session so its cookie is refused from now on (server/auth/current-user.ts),
  * and in the same statement deletes rows whose cookies have expired anyway. Inserting through a
  * select on users keeps a session of a since-removed user from failing on the foreign key.
+ * True when this call ended the session (false: already ended, or no such user).
  */
-export async function insertEndedSession(db: DbOrTx, values: { sessionId: string; userId: string; expiresAt: Date }): Promise<void> {
-  await db.execute(sql`
+export async function insertEndedSession(db: DbOrTx, values: { sessionId: string; userId: string; expiresAt: Date }): Promise<boolean> {
+  const { rows } = await db.execute(sql`
     with pruned as (delete from ${endedSessions} where ${endedSessions.expiresAt} < now())
     insert into ${endedSessions} (session_id, user_id, expires_at)
     select ${values.sessionId}::uuid, ${users.id}, ${values.expiresAt.toISOString()}::timestamptz
       from ${users} where ${users.id} = ${values.userId}::uuid
-    on conflict (session_id) do nothing`);
+    on conflict (session_id) do nothing
+    returning session_id`);
+  return rows.length > 0;
 }

@@ -4,6 +4,7 @@ import { InvalidCredentialsError, InvalidTokenError, TooManyRequestsError } from
 import { enqueueMail } from '../../mail/enqueue-mail';
 import { hashPassword, spendPasswordCheckTime, verifyPassword } from '../../auth/passwords';
 import { createToken, hashToken, PASSWORD_RESET_TTL_MS } from '../../auth/tokens';
+import { loadSessionUser } from '../../auth/current-user';
 import { isSessionExpired, sessionExpiresAt, type SessionData } from '../../auth/session';
 import type { Me } from '../../../shared/schemas/auth';
 import { recordAuditEvent } from '../audit/record-audit-event';
@@ -141,14 +142,36 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
  * Sign-out, server side: remember this session's id until the cookie would expire anyway, so a
- * copy of the cookie taken before sign-out is refused. Nothing to do for a session that has no
- * id (sealed before ids were given), no user, or has already expired.
+ * copy of the cookie taken before sign-out is refused, and record 'user.signed_out' in the same
+ * transaction. Nothing to do for a session with no user or one that has already expired. The event
+ * is written only when a signed-in user ends a live session: not for a session already ended, revoked
+ * or of an inactive user. A session sealed before ids were given has nothing to remember, but its
+ * sign-out is still recorded.
  */
-export async function endSession(db: Database, env: Pick<Env, 'SESSION_TTL_SECONDS'>, session: SessionData, now = Date.now()): Promise<void> {
-  const { sessionId, userId } = session;
-  if (!sessionId || !userId || !UUID.test(sessionId) || !UUID.test(userId)) return;
+export async function endSession(
+  db: Database,
+  env: Pick<Env, 'SESSION_TTL_SECONDS'>,
+  session: SessionData,
+  meta: RequestMeta,
+  now = Date.now(),
+): Promise<void> {
+  const { sessionId, userId, issuedAt } = session;
+  if (!userId || !UUID.test(userId) || typeof issuedAt !== 'number') return;
+  if (sessionId !== undefined && !UUID.test(sessionId)) return;
   if (isSessionExpired(session, env.SESSION_TTL_SECONDS, now)) return;
   const expiresAt = sessionExpiresAt(session, env.SESSION_TTL_SECONDS);
   if (!expiresAt) return;
-  await insertEndedSession(db, { sessionId, userId, expiresAt });
+  await db.transaction(async (tx) => {
+    // Read before the insert below, which would make this session count as ended.
+    const user = await loadSessionUser(tx, userId, issuedAt, sessionId);
+    const endedNow = sessionId ? await insertEndedSession(tx, { sessionId, userId, expiresAt }) : true;
+    if (!user || !endedNow) return;
+    await recordAuditEvent(tx, {
+      actor: { id: user.id, email: user.email },
+      action: 'user.signed_out',
+      entityType: 'user',
+      entityId: user.id,
+      requestId: meta.requestId,
+    });
+  });
 }
