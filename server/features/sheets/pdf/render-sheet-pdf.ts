@@ -302,12 +302,19 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
     for (const r of input.returns) w.paragraph(`Revision ${r.revision}, ${utc(r.returnedAt)}, ${r.reviewerName}: ${r.comments}`, { size: 8.5 });
   }
 
-  // Signature block (heading and box stay together on one page).
-  w.ensure(160);
+  // Signature block (heading and box stay together on one page). The box is as tall as its note
+  // needs: the four rows, then the note, measured at its own size and width.
+  const sig = input.signature;
+  const signatureNote = sig
+    ? 'Signed electronically in QuietLayer by the person named, after re-entering their password (21 CFR 11.50, 11.200). The SHA-256 of this PDF is kept with the signature record.'
+    : 'Not signed. A QA reviewer signs in QuietLayer with their password and the meaning of the signature; the signed PDF is stored and cannot change.';
+  const noteWidth = w.width - 16;
+  const noteHeight = w.height(signatureNote, noteWidth, { size: 7.5 });
+  const boxHeight = 84 + noteHeight + 8;
+  w.ensure(boxHeight + 56);
   w.heading('Signature');
   const sy = doc.y;
-  doc.save().lineWidth(0.8).strokeColor('#475569').rect(w.left, sy, w.width, 104).stroke().restore();
-  const sig = input.signature;
+  doc.save().lineWidth(0.8).strokeColor('#475569').rect(w.left, sy, w.width, boxHeight).stroke().restore();
   const rows: [string, string][] = [
     ['Printed name', sig?.printedName ?? ''],
     ['Role', sig?.roleLabel ?? ''],
@@ -320,15 +327,8 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
     if (value) w.text(value, w.left + 140, y, { size: 9, width: w.width - 150 });
     else doc.save().lineWidth(0.5).strokeColor('#64748b').moveTo(w.left + 140, y + 11).lineTo(w.right - 10, y + 11).stroke().restore();
   });
-  w.text(
-    sig
-      ? 'Signed electronically in QuietLayer by the person named, after re-entering their password (21 CFR 11.50, 11.200). The SHA-256 of this PDF is kept with the signature record.'
-      : 'Not signed. A QA reviewer signs in QuietLayer with their password and the meaning of the signature; the signed PDF is stored and cannot change.',
-    w.left + 8,
-    sy + 84,
-    { size: 7.5, width: w.width - 16, color: '#374151' },
-  );
-  doc.y = sy + 110;
+  w.text(signatureNote, w.left + 8, sy + 84, { size: 7.5, width: noteWidth, color: '#374151' });
+  doc.y = sy + boxHeight + 6;
 
   // Footer on every page.
   const range = doc.bufferedPageRange();
