@@ -184,23 +184,25 @@ export function renderSheetPdf(input: SheetPdfInput): Promise<Buffer> {
   ]);
 
   // Verdict.
-  w.heading('Onset margin and regime');
-  w.ensure(60);
-  const marginY = doc.y;
   const word = marginWords[results.status];
   const marginText = results.margin === null ? 'no onset possible' : `${num(results.margin, 3)} ×`;
+  const bx = w.left + 204;
+  const sideWidth = w.right - bx;
+  const statusLine = `${word}: margin ${results.status === 'quiet' ? `at or above the alert threshold ${num(results.alertThreshold, 3)}` : results.status === 'close' ? `between 1 and the alert threshold ${num(results.alertThreshold, 3)}` : 'below 1: cells are expected'}.`;
+  const regimeLine = `Regime: ${results.regimeLabel}. At onset: ${results.mechanismLabel}.`;
+  // Heading, margin box and the words beside it stay on one page (the mechanism sentence can run
+  // to several lines; a break inside it would strand its last line on a page of its own).
+  const sideHeight =
+    w.height(statusLine, sideWidth, { size: 9 }) + w.height(regimeLine, sideWidth, { size: 9 }) + w.height(results.mechanismSentence, sideWidth, { size: 8.5 }) + 8;
+  w.ensure(Math.max(50, sideHeight) + 44);
+  w.heading('Onset margin and regime');
+  const marginY = doc.y;
   doc.save().rect(w.left, marginY, 190, 46).fillColor('#f8fafc').fill().lineWidth(1.2).strokeColor(marginColours[results.status]).rect(w.left, marginY, 190, 46).stroke().restore();
   w.text('Onset margin (≥ 1 means quiet)', w.left + 8, marginY + 4, { size: 7.5, color: '#374151' });
   w.text(`${marginText}  ${word}`, w.left + 8, marginY + 16, { size: 17, bold: true, color: marginColours[results.status] });
-  const bx = w.left + 204;
-  w.text(
-    `${word}: margin ${results.status === 'quiet' ? `at or above the alert threshold ${num(results.alertThreshold, 3)}` : results.status === 'close' ? `between 1 and the alert threshold ${num(results.alertThreshold, 3)}` : 'below 1: cells are expected'}.`,
-    bx,
-    marginY + 2,
-    { size: 9, width: w.right - bx },
-  );
-  w.text(`Regime: ${results.regimeLabel}. At onset: ${results.mechanismLabel}.`, bx, doc.y + 2, { size: 9, width: w.right - bx });
-  w.text(results.mechanismSentence, bx, doc.y + 2, { size: 8.5, width: w.right - bx, color: '#374151' });
+  w.text(statusLine, bx, marginY + 2, { size: 9, width: sideWidth });
+  w.text(regimeLine, bx, doc.y + 2, { size: 9, width: sideWidth });
+  w.text(results.mechanismSentence, bx, doc.y + 2, { size: 8.5, width: sideWidth, color: '#374151' });
   doc.y = Math.max(doc.y, marginY + 50) + 4;
 
   const g = results.groups;
