@@ -109,6 +109,12 @@ describe('process sheet from issue to signature', () => {
       expect(text).toContain('State: Signed');
       expect(text).toContain('Hannah Okafor (QA reviewer)');
       expect(text).toContain('Approved for production');
+      // No page is left nearly empty by a section broken across it: every page but the last holds at
+      // least ten lines of its own besides the two footer lines (pdftotext ends each page with \f).
+      const pages = text.split('\f').filter((page) => page.trim() !== '');
+      for (const page of pages.slice(0, -1)) {
+        expect(page.split('\n').filter((line) => line.trim() !== '').length - 2).toBeGreaterThanOrEqual(10);
+      }
       execFileSync('pdftoppm', ['-png', '-r', '90', '-f', '1', '-l', '1', '-singlefile', pdfPath, join(screenshotDir, 'sheet-page1')]);
       expect(existsSync(join(screenshotDir, 'sheet-page1.png'))).toBe(true);
       expect(statSync(join(screenshotDir, 'sheet-page1.png')).size).toBeGreaterThan(20_000);
