@@ -126,7 +126,13 @@ describe('script-looking text in free-text fields', () => {
 
       for (const path of ['/fluids', `/fluids/${fluidId}`, '/layer-checks', `/layer-checks/${checkId}`, '/sheets', `/sheets/${sheetId}`]) {
         await page.goto(path);
-        await page.getByText(path.includes('sheets') ? PAYLOAD_2 : PAYLOAD).first().waitFor({ timeout: 30_000 });
+        // Visible text only: the sheet list's line filter also lists the payload, in a hidden <option>
+        // that comes first in the page and may load before or after the table.
+        await page
+          .getByText(path.includes('sheets') ? PAYLOAD_2 : PAYLOAD)
+          .filter({ visible: true })
+          .first()
+          .waitFor({ timeout: 30_000 });
         await page.waitForTimeout(300); // let any injected handler fire if it could
         expect({ path, xss: await page.evaluate(() => (window as unknown as { __xss?: number }).__xss) }).toEqual({ path, xss: undefined });
         expect(await page.locator('img[src="x"], svg[onload], script:not([src])').count(), path).toBe(0);
