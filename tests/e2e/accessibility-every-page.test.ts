@@ -5,13 +5,13 @@
  * Accessibility Guidelines (WCAG) 2.1"). The page list comes from src/config/navigation.ts, so a new
  * nav entry is checked without touching this file.
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { navigationFor } from '../../src/config/navigation';
 import type { Role } from '../../shared/schemas/roles';
 import { wcagViolations, type AxeViolation } from './support/accessibility';
-import { launchBrowser, newPage, signIn } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { newPage, signIn } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 300_000;
 const demoRoles: ReadonlyArray<{ role: Role; email: string }> = [
@@ -21,16 +21,7 @@ const demoRoles: ReadonlyArray<{ role: Role; email: string }> = [
   { role: 'reviewer', email: 'reviewer@larkspur.example' },
 ];
 
-let app: TestApp;
-let browser: Browser;
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 
 /** Waits until the page has a level-1 heading and no request has been running for a moment. */
 async function settle(page: Page): Promise<void> {
@@ -42,7 +33,7 @@ const serious = (violations: AxeViolation[]) => violations.filter((v) => v.impac
 
 describe('axe-core on every page', () => {
   it('public pages: sign-in, forgot password, reset password, accept invitation, not found', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       const found: Record<string, AxeViolation[]> = {};
       for (const path of ['/sign-in', '/forgot-password', '/reset-password?token=not-a-real-token-but-long-enough', '/accept-invitation?token=not-a-real-token-but-long-enough', '/no-such-page']) {
@@ -58,7 +49,7 @@ describe('axe-core on every page', () => {
 
   for (const demo of demoRoles) {
     it(`every navigation page as ${demo.role}`, async () => {
-      const { context, page } = await newPage(browser, app.url, { width: 1280, height: 900 });
+      const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1280, height: 900 });
       try {
         await signIn(page, demo.email);
         const items = navigationFor(demo.role);
@@ -78,7 +69,7 @@ describe('axe-core on every page', () => {
   }
 
   it('detail pages: a fluid, a layer check, a process sheet (as the process engineer)', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1280, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1280, height: 900 });
     try {
       await signIn(page, 'engineer@larkspur.example');
       const api = context.request;

@@ -6,31 +6,27 @@
  * invitation link setting a password (policy: at least 12 characters, issue 2 "Bad input"),
  * and the audit trail with its filters and before/after snapshots.
  */
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { wcagViolations } from './support/accessibility';
-import { launchBrowser, navigationLabels, newPage, screenshot, signIn } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { navigationLabels, newPage, screenshot, signIn } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 120_000;
 const INVITEE = { email: 'rosa.marchetti@larkspur.example', name: 'Rosa Marchetti', role: 'Line technician' };
 
-let app: TestApp;
-let browser: Browser;
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 let admin: { context: BrowserContext; page: Page };
 let invitationLink = '';
 
 beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  admin = await newPage(browser, app.url);
+  admin = await newPage(e2e.browser, e2e.app.url);
   await signIn(admin.page, 'admin@larkspur.example');
 }, E2E_TIMEOUT);
 
+// Runs before the shared hook closes the browser (after-hooks run in reverse order).
 afterAll(async () => {
   await admin?.context.close();
-  await browser?.close();
-  await app?.close();
 }, E2E_TIMEOUT);
 
 function inviteForm(page: Page) {
@@ -126,7 +122,7 @@ describe('administrator pages', () => {
 
   it('lets the invited person set a password (≥ 12 characters) and sign in as their role', async () => {
     expect(invitationLink).not.toBe('');
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await page.goto(invitationLink);
       await page.getByText(INVITEE.name).waitFor();
@@ -150,7 +146,7 @@ describe('administrator pages', () => {
   }, E2E_TIMEOUT);
 
   it('resets a forgotten password through the e-mailed link, once', async () => {
-    const person = await newPage(browser, app.url);
+    const person = await newPage(e2e.browser, e2e.app.url);
     try {
       // The person asks for a link; the answer never says whether the address exists.
       await person.page.goto('/sign-in');

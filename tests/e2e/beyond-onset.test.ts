@@ -4,28 +4,17 @@
  * screenshots under test-output/screenshots/ and an axe WCAG 2.1 AA check of each page.
  * The Larkspur Coatings demo data (Line 2, the weld cell and its two heats) are invented.
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { wcagViolations } from './support/accessibility';
-import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { newPage, screenshot, signIn } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 180_000;
 /** The plotting bundle takes several seconds to evaluate here (STACK.md): wait generously. */
 const PLOT_WAIT = 45_000;
 
-let app: TestApp;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 
 async function waitForPlots(page: Page, count: number) {
   await page.waitForFunction((n) => document.querySelectorAll('[data-testid="plot"] .main-svg').length >= n, count, { timeout: PLOT_WAIT });
@@ -33,7 +22,7 @@ async function waitForPlots(page: Page, count: number) {
 
 describe('Drying path page', () => {
   it('computes the Line 2 demo path with the verdict, zone table, ventilation caution and three plots with the zones shaded', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1440, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1440, height: 900 });
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Drying path' }).click();
@@ -67,7 +56,7 @@ describe('Drying path page', () => {
 
 describe('Property spread section', () => {
   it('runs a seeded spread inline, shows the onset probability, percentiles and sensitivity chart, then a queued run with a progress bar', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1280, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1280, height: 900 });
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.goto('/property-spread');
@@ -102,7 +91,7 @@ describe('Property spread section', () => {
 
 describe('Melt pool flow page', () => {
   it('shows the σ(T) curve, the flow verdict, the welding cautions, the heats register and the sulfur warning for the demo heats', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1440, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1440, height: 900 });
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.goto('/melt-pool');
@@ -132,7 +121,7 @@ describe('Melt pool flow page', () => {
   }, E2E_TIMEOUT);
 
   it('lets a line technician read but not change: no save, run or add controls', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'technician@larkspur.example');
       await page.goto('/melt-pool');

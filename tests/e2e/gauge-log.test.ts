@@ -4,28 +4,24 @@
  * detected columns and the verdicts in the preview, saves it, and sees the Over and Close readings
  * flagged in the table and on the chart against the quiet window.
  */
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { newPage, screenshot, signIn } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 180_000;
 
-let app: TestApp;
-let browser: Browser;
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 let technician: { context: BrowserContext; page: Page };
 
 beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  technician = await newPage(browser, app.url, { width: 1280, height: 900 });
+  technician = await newPage(e2e.browser, e2e.app.url, { width: 1280, height: 900 });
   await signIn(technician.page, 'technician@larkspur.example');
 }, E2E_TIMEOUT);
 
+// Runs before the shared hook closes the browser (after-hooks run in reverse order).
 afterAll(async () => {
   await technician?.context.close();
-  await browser?.close();
-  await app?.close();
 }, E2E_TIMEOUT);
 
 /** An invented run E-0501 on Line 2: 24 readings drifting from 52 µm down to 30 µm wet, every 5 m. */

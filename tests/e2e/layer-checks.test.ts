@@ -17,12 +17,12 @@
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { wcagViolations } from './support/accessibility';
-import { launchBrowser, newPage, screenshot, screenshotDir, signIn } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { newPage, screenshot, screenshotDir, signIn } from './support/browser';
 import { projectRoot } from '../../scripts/lib/project-root';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 240_000;
 const CHART_WAIT = 45_000;
@@ -56,19 +56,8 @@ const marangoni = (slope * deltaT * depth) / (mu * kappa); // ≈ 221.0
 const expectedMargin = 79.607 / marangoni; // ≈ 0.360
 const expectedSpacingMicrometres = ((4 * Math.PI * depth) / (Math.sqrt(3) * 1.993)) * 1e6; // ≈ 184.9 µm
 
-let app: TestApp;
-let browser: Browser;
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 let checkUrl = '';
-
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
 
 /** The number at the start of a shown value ("0.36×", "184.9 µm", "221.0"), thousands separators dropped. */
 function leadingNumber(text: string): number {
@@ -98,7 +87,7 @@ async function fillProperty(page: Page, key: string, value: string, source: stri
 
 describe('fluid library and layer check in the browser', () => {
   it('a Process engineer enters a fluid in US units, builds a check and sees the regime, margin and quiet window', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1360, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1360, height: 900 });
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Fluids' }).click();
@@ -194,7 +183,7 @@ describe('fluid library and layer check in the browser', () => {
 
   it('a Line technician opens the same check and can read it but not change it', async () => {
     expect(checkUrl).toMatch(/^\/layer-checks\//);
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'technician@larkspur.example');
       await page.goto(checkUrl);
@@ -215,7 +204,7 @@ describe('fluid library and layer check in the browser', () => {
   }, E2E_TIMEOUT);
 
   it('"Only my checks" keeps the engineer\'s own checks and stays in the address; a technician who owns none sees why the list is empty', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.goto('/layer-checks');
@@ -244,7 +233,7 @@ describe('fluid library and layer check in the browser', () => {
     } finally {
       await context.close();
     }
-    const technician = await newPage(browser, app.url);
+    const technician = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(technician.page, 'technician@larkspur.example');
       await technician.page.goto('/layer-checks?owner=me');
@@ -257,8 +246,8 @@ describe('fluid library and layer check in the browser', () => {
 
   it('a stale save is refused: the second engineer is told someone saved a newer revision and can reload it', async () => {
     expect(checkUrl).toMatch(/^\/layer-checks\//);
-    const first = await newPage(browser, app.url);
-    const second = await newPage(browser, app.url);
+    const first = await newPage(e2e.browser, e2e.app.url);
+    const second = await newPage(e2e.browser, e2e.app.url);
     try {
       for (const { page } of [first, second]) {
         await signIn(page, 'engineer@larkspur.example');
@@ -290,7 +279,7 @@ describe('fluid library and layer check in the browser', () => {
   }, E2E_TIMEOUT);
 
   it('a CSV import shows line-numbered problems first and saves nothing until the file is clean', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.goto('/fluids');
@@ -326,7 +315,7 @@ describe('fluid library and layer check in the browser', () => {
   }, E2E_TIMEOUT);
 
   it('the batch page evaluates the onset command’s CSV fixture and flags rows with errors', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'engineer@larkspur.example');
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Batch' }).click();

@@ -6,12 +6,11 @@
  * Later features add their own entries to src/config/navigation.ts: the foundation entries are
  * checked against the contract's list written out here, and the whole bar against that config.
  */
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { navigationFor } from '../../src/config/navigation';
 import { wcagViolations } from './support/accessibility';
-import { launchBrowser, navigationLabels, newPage, screenshot, signIn, signOut } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { navigationLabels, newPage, screenshot, signIn, signOut } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 120_000;
 
@@ -24,23 +23,12 @@ const demoRoles = [
   { role: 'reviewer', email: 'reviewer@larkspur.example', label: 'QA reviewer', nav: ['Home'] },
 ] as const;
 
-let app: TestApp;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 
 describe('signing in as each demo role', () => {
   for (const demo of demoRoles) {
     it(`${demo.label} signs in with the demo sign-in and sees the navigation of the role (foundation: ${demo.nav.join(', ')})`, async () => {
-      const { context, page } = await newPage(browser, app.url);
+      const { context, page } = await newPage(e2e.browser, e2e.app.url);
       try {
         // Arrange: no session yet, so Home sends the person to sign-in and remembers nothing else.
         await page.goto('/');
@@ -77,7 +65,7 @@ describe('signing in as each demo role', () => {
   }
 
   it('a Line technician who opens /admin/users by URL is told the page is not permitted for the role', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'technician@larkspur.example');
       await page.goto('/admin/users');
@@ -91,7 +79,7 @@ describe('signing in as each demo role', () => {
   }, E2E_TIMEOUT);
 
   it('a wrong password keeps the person on the sign-in page with the server’s message', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await page.goto('/sign-in');
       await page.getByLabel('E-mail').fill('engineer@larkspur.example');
@@ -107,7 +95,7 @@ describe('signing in as each demo role', () => {
   }, E2E_TIMEOUT);
 
   it('after sign-in the person returns to the page they asked for', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await page.goto('/admin/audit?actor=admin');
       await page.waitForURL(/\/sign-in\?next=/);
@@ -120,7 +108,7 @@ describe('signing in as each demo role', () => {
   }, E2E_TIMEOUT);
 
   it('is usable from the keyboard: skip link first, then the menu opens and closes with the keyboard', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await signIn(page, 'reviewer@larkspur.example');
       await page.locator('body').focus();
@@ -147,7 +135,7 @@ describe('signing in as each demo role', () => {
   }, E2E_TIMEOUT);
 
   it('an unknown address shows the not-found page', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       await page.goto('/no/such/page');
       await page.getByRole('heading', { name: 'No page at this address' }).waitFor();

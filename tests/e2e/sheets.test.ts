@@ -7,33 +7,21 @@
 import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { projectRoot } from '../../scripts/lib/project-root';
 import { wcagViolations } from './support/accessibility';
-import { launchBrowser, newPage, screenshot, screenshotDir, signIn, DEMO_PASSWORD } from './support/browser';
-import { startTestApp, type TestApp } from './support/app-server';
+import { newPage, screenshot, screenshotDir, signIn, DEMO_PASSWORD } from './support/browser';
+import { appAndBrowserForThisFile } from './support/app-and-browser';
 
 const E2E_TIMEOUT = 180_000;
-let app: TestApp;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 
 describe('process sheet from issue to signature', () => {
   it(
     'engineer submits, reviewer signs, the signed PDF renders and verifies',
     async () => {
       // Arrange: the engineer saves a layer check on the demo primer (Line 2, invented data).
-      const engineer = await newPage(browser, app.url);
+      const engineer = await newPage(e2e.browser, e2e.app.url);
       await signIn(engineer.page, 'engineer@larkspur.example');
       const fluids = await engineer.context.request.get('/api/fluids', { params: { q: 'Primer', pageSize: 10 } });
       const primer = (await fluids.json()).items[0];
@@ -80,7 +68,7 @@ describe('process sheet from issue to signature', () => {
       await engineer.context.close();
 
       // Act 2: the reviewer opens it and signs with password and meaning.
-      const reviewer = await newPage(browser, app.url);
+      const reviewer = await newPage(e2e.browser, e2e.app.url);
       await signIn(reviewer.page, 'reviewer@larkspur.example');
       await reviewer.page.goto(sheetUrl);
       await reviewer.page.getByRole('button', { name: 'Sign…' }).click();

@@ -10,11 +10,11 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { demoFluidInputs } from '../../scripts/lib/seed/demo-fluids';
-import { launchBrowser, newPage, screenshot, signIn } from '../e2e/support/browser';
-import { startTestApp, type TestApp } from '../e2e/support/app-server';
+import { newPage, screenshot, signIn } from '../e2e/support/browser';
+import { appAndBrowserForThisFile } from '../e2e/support/app-and-browser';
 
 const E2E_TIMEOUT = 180_000;
 const PLOT_WAIT = 60_000;
@@ -22,16 +22,7 @@ const PAYLOAD = '<img src=x onerror=window.__xss=1>';
 const PAYLOAD_2 = '"><svg onload=window.__xss=2>';
 const PAYLOAD_3 = "<script>window.__xss=3</script>";
 
-let app: TestApp;
-let browser: Browser;
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-}, E2E_TIMEOUT);
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-}, E2E_TIMEOUT);
+const e2e = appAndBrowserForThisFile(E2E_TIMEOUT);
 
 /** Collects every CSP violation the page reports (event and console), from before any script runs. */
 async function watchViolations(page: Page): Promise<() => Promise<string[]>> {
@@ -49,7 +40,7 @@ async function watchViolations(page: Page): Promise<() => Promise<string[]>> {
 
 describe('Content-Security-Policy in the browser', () => {
   it('serves the page under the strict policy, draws the drying-path plots, and reports no violation', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1440, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1440, height: 900 });
     try {
       const violations = await watchViolations(page);
       const response = await page.goto('/sign-in');
@@ -78,7 +69,7 @@ describe('Content-Security-Policy in the browser', () => {
   }, E2E_TIMEOUT);
 
   it('blocks an injected inline script (the policy is really enforced)', async () => {
-    const { context, page } = await newPage(browser, app.url);
+    const { context, page } = await newPage(e2e.browser, e2e.app.url);
     try {
       const violations = await watchViolations(page);
       await page.goto('/sign-in');
@@ -97,7 +88,7 @@ describe('Content-Security-Policy in the browser', () => {
 
 describe('script-looking text in free-text fields', () => {
   it('shows it literally and never runs it: fluid, layer check and process sheet pages, and the sheet PDF', async () => {
-    const { context, page } = await newPage(browser, app.url, { width: 1280, height: 900 });
+    const { context, page } = await newPage(e2e.browser, e2e.app.url, { width: 1280, height: 900 });
     try {
       const violations = await watchViolations(page);
       await signIn(page, 'engineer@larkspur.example');
