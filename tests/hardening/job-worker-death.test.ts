@@ -20,6 +20,7 @@ import { startServer, type StartedServer } from '../../server/index';
 import { SPREAD_QUEUE } from '../../server/jobs/start-jobs';
 import { createScratchDatabase, type ScratchDatabase } from '../setup/scratch-database';
 import { createTestUser } from '../integration/helpers/users';
+import { roundFluid } from '../integration/helpers/round-fluid';
 
 const root = path.resolve(import.meta.dirname, '..', '..');
 let scratch: ScratchDatabase;
@@ -72,15 +73,7 @@ describe('a queued job whose worker dies', () => {
     expect((await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password })).status).toBe(200);
     const fluid = await agent.post('/api/fluids').send({
       name: 'Worker death fluid',
-      kind: 'other',
-      referenceTemperature: '20 °C',
-      density: { value: '1000 kg/m³' },
-      expansion: { value: '0 1/K' },
-      viscosity: { law: 'points', points: [{ temperature: '20 °C', value: '10 mPa·s' }] },
-      surfaceTension: { value: '30 mN/m' },
-      surfaceTensionSlope: { value: '-0.1 mN/(m·K)' },
-      conductivity: { value: '0.1 W/(m·K)' },
-      heatCapacity: { value: '1000 J/(kg·K)' },
+      ...roundFluid,
     });
     expect(fluid.status).toBe(201);
     const check = await agent.post('/api/layer-checks').send({

@@ -9,23 +9,9 @@ import { processSheets, sheetRevisions, sheetSignatures } from '../../server/db/
 import type { Database } from '../../server/db/client';
 import type { SheetSnapshot } from '../../shared/schemas/sheets';
 
-/**
- * Round-number fluid (same as the layer-check tests): μ = 10 mPa·s, k = 0.1 W/(m·K), ρ = 1000 kg/m³,
- * c_p = 1000 J/(kg·K) → κ = 1e-7 m²/s; dσ/dT = −0.1 mN/(m·K); β = 0. At d = 1 mm, Ma = 100·ΔT.
- */
-export const roundFluid = {
-  kind: 'other',
-  referenceTemperature: '20 °C',
-  validFrom: '10 °C',
-  validTo: '30 °C',
-  density: { value: '1000 kg/m³' },
-  expansion: { value: '0 1/K' },
-  viscosity: { law: 'points', points: [{ temperature: '20 °C', value: '10 mPa·s' }] },
-  surfaceTension: { value: '30 mN/m' },
-  surfaceTensionSlope: { value: '-0.1 mN/(m·K)' },
-  conductivity: { value: '0.1 W/(m·K)' },
-  heatCapacity: { value: '1000 J/(kg·K)' },
-};
+import { roundFluid } from './helpers/round-fluid';
+
+export { roundFluid };
 
 /** Pearson's layer at onset at 1 mm: Ma = 100 × 0.79607 = 79.607 (Pearson 1958, J. Fluid Mech. 4:489). */
 export const pearsonCheck = {

@@ -5,6 +5,7 @@ import { STANDARD_GRAVITY } from '../../shared/units/constants';
 import { roleValues, type Role } from '../../shared/schemas/roles';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent } from './helpers/users';
+import { roundFluid as roundFluidFields } from './helpers/round-fluid';
 
 let ctx: TestContext;
 const agents = new Map<Role, TestAgent>();
@@ -15,20 +16,7 @@ let fluidId: string;
  * c_p = 1000 J/(kg·K) → κ = 1e-7 m²/s; dσ/dT = −0.1 mN/(m·K); β = 0 (no buoyancy).
  * For d = 1 mm: Ma = 1e-4·ΔT·1e-3/(1e-2·1e-7) = 100·ΔT (hand calculation).
  */
-const roundFluid = {
-  name: 'Round-number fluid',
-  kind: 'other',
-  referenceTemperature: '20 °C',
-  validFrom: '10 °C',
-  validTo: '30 °C',
-  density: { value: '1000 kg/m³' },
-  expansion: { value: '0 1/K' },
-  viscosity: { law: 'points', points: [{ temperature: '20 °C', value: '10 mPa·s' }] },
-  surfaceTension: { value: '30 mN/m' },
-  surfaceTensionSlope: { value: '-0.1 mN/(m·K)' },
-  conductivity: { value: '0.1 W/(m·K)' },
-  heatCapacity: { value: '1000 J/(kg·K)' },
-};
+const roundFluid = { name: 'Round-number fluid', ...roundFluidFields };
 
 const engineer = () => agents.get('engineer') as TestAgent;
 

@@ -5,6 +5,7 @@ import { createMailTransport, startOutboxDispatcher, startSmtpFake } from '../..
 import { createScratchDatabase, type ScratchDatabase } from '../setup/scratch-database';
 import { createTestContext, type TestContext } from './helpers/test-app';
 import { createTestUser, signedInAgent } from './helpers/users';
+import { roundFluid } from './helpers/round-fluid';
 
 // A database of its own: the dispatcher sends every pending message, and other files queue mail too.
 let scratch: ScratchDatabase;
@@ -29,15 +30,7 @@ describe('process sheet e-mail through the outbox and the local SMTP fake', () =
     const qa = await signedInAgent(ctx.app, reviewerA);
     const fluid = await engineer.post('/api/fluids').send({
       name: 'Mail test fluid',
-      kind: 'other',
-      referenceTemperature: '20 °C',
-      density: { value: '1000 kg/m³' },
-      expansion: { value: '0 1/K' },
-      viscosity: { law: 'points', points: [{ temperature: '20 °C', value: '10 mPa·s' }] },
-      surfaceTension: { value: '30 mN/m' },
-      surfaceTensionSlope: { value: '-0.1 mN/(m·K)' },
-      conductivity: { value: '0.1 W/(m·K)' },
-      heatCapacity: { value: '1000 J/(kg·K)' },
+      ...roundFluid,
     });
     expect(fluid.status).toBe(201);
     const check = await engineer.post('/api/layer-checks').send({

@@ -11,6 +11,7 @@ import type { SpreadPlan } from '../../shared/physics/spread/spread-types';
 import type { PhysicalLayer } from '../../shared/physics/sizing/types';
 import { propertySpreads } from '../../server/db/schema/beyond-onset';
 import { createTestUser } from './helpers/users';
+import { roundFluid } from './helpers/round-fluid';
 
 /**
  * A queued Property spread survives a server restart: server A's worker stores some chunks, A stops
@@ -57,15 +58,7 @@ describe('queued Property spread (pg-boss) across a server restart', () => {
 
     const fluid = await agent.post('/api/fluids').send({
       name: `Queue fluid ${Date.now()}`,
-      kind: 'other',
-      referenceTemperature: '20 °C',
-      density: { value: '1000 kg/m³' },
-      expansion: { value: '0 1/K' },
-      viscosity: { law: 'points', points: [{ temperature: '20 °C', value: '10 mPa·s' }] },
-      surfaceTension: { value: '30 mN/m' },
-      surfaceTensionSlope: { value: '-0.1 mN/(m·K)' },
-      conductivity: { value: '0.1 W/(m·K)' },
-      heatCapacity: { value: '1000 J/(kg·K)' },
+      ...roundFluid,
     });
     expect(fluid.status).toBe(201);
     // Ma = 100·ΔT at 1 mm (hand calculation); ΔT = 0.79607 K is Pearson's onset Ma_c = 79.607 (Pearson 1958).
